@@ -1,0 +1,3 @@
+export * from './roles.js';
+export * from './shears.js';
+export * from './passwords.js';
