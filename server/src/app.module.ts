@@ -1,0 +1,75 @@
+import { Module, RequestMethod } from '@nestjs/common';
+import { ConfigModule, ConfigService } from '@nestjs/config';
+import { APP_FILTER, APP_GUARD } from '@nestjs/core';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { ThrottlerModule } from '@nestjs/throttler';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { randomUUID } from 'node:crypto';
+import { LoggerModule } from 'nestjs-pino';
+import { AuthModule } from './auth/auth.module';
+import { AccessGuard } from './auth/guards/access.guard';
+import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
+import { validateEnvironment, type AppConfig } from './config/environment';
+import { typeormOptions } from './database/typeorm-options';
+import { DevModule } from './dev/dev.module';
+import { HealthModule } from './health/health.module';
+import { MailModule } from './mail/mail.module';
+import { UsersModule } from './users/users.module';
+
+const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
+
+@Module({
+  imports: [
+    ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, validate: validateEnvironment }),
+    LoggerModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<AppConfig, true>) => ({
+        forRoutes: [{ path: '{*path}', method: RequestMethod.ALL }],
+        pinoHttp: {
+          level: config.get('LOG_LEVEL', { infer: true }),
+          // Reuse a caller's request id when it looks like one, so a load balancer's id follows the request.
+          genReqId: (req, res) => {
+            const incoming = req.headers['x-request-id'];
+            const id = typeof incoming === 'string' && REQUEST_ID.test(incoming) ? incoming : randomUUID();
+            res.setHeader('x-request-id', id);
+            return id;
+          },
+          redact: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]'],
+          autoLogging: { ignore: (req) => req.url === '/api/health' },
+        },
+      }),
+    }),
+    TypeOrmModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<AppConfig, true>) => ({
+        ...typeormOptions(config.get('DATABASE_URL', { infer: true })),
+        entities: [],
+        autoLoadEntities: true,
+      }),
+    }),
+    ThrottlerModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<AppConfig, true>) => ({
+        throttlers: [{ name: 'auth', ttl: 60_000, limit: config.get('AUTH_RATE_LIMIT', { infer: true }) }],
+        errorMessage: 'Too many attempts. Wait a minute and try again.',
+      }),
+    }),
+    ServeStaticModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<AppConfig, true>) => {
+        const rootPath = config.get('CLIENT_DIST', { infer: true });
+        return rootPath ? [{ rootPath, exclude: ['/api/{*path}'] }] : [];
+      },
+    }),
+    MailModule,
+    UsersModule,
+    AuthModule,
+    HealthModule,
+    DevModule,
+  ],
+  providers: [
+    { provide: APP_GUARD, useClass: AccessGuard },
+    { provide: APP_FILTER, useClass: AllExceptionsFilter },
+  ],
+})
+export class AppModule {}

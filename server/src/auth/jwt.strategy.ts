@@ -1,0 +1,35 @@
+import { Injectable } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { PassportStrategy } from '@nestjs/passport';
+import { ExtractJwt, Strategy } from 'passport-jwt';
+import type { AppConfig } from '../config/environment';
+import { UsersService } from '../users/users.service';
+import type { Actor } from './actor';
+import { JWT_ALGORITHM, JWT_AUDIENCE, JWT_ISSUER } from './jwt.constants';
+
+interface AccessClaims {
+  sub: string;
+}
+
+@Injectable()
+export class JwtStrategy extends PassportStrategy(Strategy) {
+  constructor(
+    config: ConfigService<AppConfig, true>,
+    private readonly users: UsersService,
+  ) {
+    super({
+      jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
+      secretOrKey: config.get('JWT_SECRET', { infer: true }),
+      algorithms: [JWT_ALGORITHM],
+      issuer: JWT_ISSUER,
+      audience: JWT_AUDIENCE,
+      ignoreExpiration: false,
+    });
+  }
+
+  /** Re-reads the user so a deactivation or role change takes effect before the token expires. */
+  async validate(claims: AccessClaims): Promise<Actor | false> {
+    const user = await this.users.findActive(claims.sub);
+    return user ? { id: user.id, email: user.email, name: user.name, role: user.role } : false;
+  }
+}

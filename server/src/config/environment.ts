@@ -1,0 +1,92 @@
+import { plainToInstance, Transform } from 'class-transformer';
+import {
+  IsIn,
+  IsInt,
+  IsOptional,
+  IsString,
+  IsUrl,
+  Max,
+  Min,
+  MinLength,
+  validateSync,
+} from 'class-validator';
+
+/** The environment the API reads, with the safe local defaults `npm start` relies on. */
+export class Environment {
+  @IsIn(['development', 'test', 'production'])
+  NODE_ENV: 'development' | 'test' | 'production' = 'development';
+
+  @IsString()
+  HOST = '127.0.0.1';
+
+  @Transform(({ value }) => Number(value))
+  @IsInt()
+  @Min(0)
+  @Max(65535)
+  PORT = 3000;
+
+  @IsUrl({ protocols: ['postgres', 'postgresql'], require_tld: false, require_protocol: true })
+  DATABASE_URL = 'postgres://postgres@127.0.0.1:54320/keenroute';
+
+  // The default only suits a local demo; production must set its own (checked below).
+  @IsString()
+  @MinLength(32)
+  JWT_SECRET = 'keenroute-local-development-secret-change-me';
+
+  @IsUrl({ require_tld: false, require_protocol: true })
+  APP_URL = 'http://127.0.0.1:3000';
+
+  @IsString()
+  SMTP_HOST = '127.0.0.1';
+
+  @Transform(({ value }) => Number(value))
+  @IsInt()
+  @Min(1)
+  @Max(65535)
+  SMTP_PORT = 2525;
+
+  @IsString()
+  MAIL_FROM = 'Keenroute (demo) <no-reply@demo.keenroute.test>';
+
+  @IsOptional()
+  @IsUrl({ require_tld: false, require_protocol: true })
+  MAIL_CATCHER_URL?: string;
+
+  @IsOptional()
+  @IsString()
+  CLIENT_DIST?: string;
+
+  @IsString()
+  DATA_DIR = '.data/app';
+
+  @IsIn(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'])
+  LOG_LEVEL = 'info';
+
+  /** Sign-in attempts allowed per e-mail and address in one minute. */
+  @Transform(({ value }) => Number(value))
+  @IsInt()
+  @Min(1)
+  AUTH_RATE_LIMIT = 10;
+}
+
+export type AppConfig = Readonly<Environment>;
+
+/** Validates process.env once at start; a bad variable stops the server with a message naming it. */
+export function validateEnvironment(raw: Record<string, unknown>): AppConfig {
+  const known = Object.keys(new Environment());
+  const picked = Object.fromEntries(
+    Object.entries(raw).filter(([key, value]) => known.includes(key) && value !== ''),
+  );
+  const env = plainToInstance(Environment, picked, { exposeDefaultValues: true });
+  const errors = validateSync(env, { skipMissingProperties: false });
+  const problems = errors.map(
+    (error) => `${error.property}: ${Object.values(error.constraints ?? {}).join('; ')}`,
+  );
+  if (env.NODE_ENV === 'production' && env.JWT_SECRET === new Environment().JWT_SECRET) {
+    problems.push('JWT_SECRET: set a secret of your own in production');
+  }
+  if (problems.length > 0) {
+    throw new Error(`Keenroute's configuration is not valid:\n  ${problems.join('\n  ')}`);
+  }
+  return Object.freeze(env);
+}

@@ -1,0 +1,41 @@
+import { Injectable, Logger } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { createTransport, type Transporter } from 'nodemailer';
+import type { AppConfig } from '../config/environment';
+
+export interface OutgoingMail {
+  to: string;
+  subject: string;
+  text: string;
+  html?: string;
+}
+
+/** Sends e-mail over SMTP (the local mail catcher in development and tests, a real relay in production). */
+@Injectable()
+export class MailService {
+  private readonly logger = new Logger(MailService.name);
+  private readonly transport: Transporter;
+  private readonly from: string;
+
+  constructor(config: ConfigService<AppConfig, true>) {
+    this.from = config.get('MAIL_FROM', { infer: true });
+    this.transport = createTransport({
+      host: config.get('SMTP_HOST', { infer: true }),
+      port: config.get('SMTP_PORT', { infer: true }),
+      secure: false,
+      ignoreTLS: config.get('NODE_ENV', { infer: true }) !== 'production',
+      connectionTimeout: 5000,
+    });
+  }
+
+  /** nodemailer builds the headers itself, so a name or subject with line breaks cannot inject a header. */
+  async send(mail: OutgoingMail): Promise<boolean> {
+    try {
+      await this.transport.sendMail({ from: this.from, ...mail });
+      return true;
+    } catch (error) {
+      this.logger.error({ err: error, to: mail.to, subject: mail.subject }, 'e-mail could not be sent');
+      return false;
+    }
+  }
+}
