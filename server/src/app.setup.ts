@@ -11,7 +11,10 @@ import type { AppConfig } from './config/environment';
 export function configureApp(app: INestApplication): INestApplication {
   app.useLogger(app.get(Logger));
   app.setGlobalPrefix('api');
-  const https = app.get<ConfigService<AppConfig, true>>(ConfigService).get('APP_URL', { infer: true }).startsWith('https:');
+  const https = app
+    .get<ConfigService<AppConfig, true>>(ConfigService)
+    .get('APP_URL', { infer: true })
+    .startsWith('https:');
   // Over plain http on loopback, HSTS and upgrade-insecure-requests would send the browser to an https that is not there.
   app.use(
     helmet({

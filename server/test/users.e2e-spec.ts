@@ -31,22 +31,31 @@ describe('users, invitations and password resets (e2e)', () => {
       {
         name: 'POST /api/users/invitations',
         call: (headers: Headers) =>
-          http().post('/api/users/invitations').set(headers).send({ email: newEmail('x'), name: 'X', role: 'client' }),
+          http()
+            .post('/api/users/invitations')
+            .set(headers)
+            .send({ email: newEmail('x'), name: 'X', role: 'client' }),
       },
       {
         name: 'PATCH /api/users/:id',
         call: async (headers: Headers) =>
-          http().patch(`/api/users/${(await createUser(app, 'client')).id}`).set(headers).send({ name: 'Y' }),
+          http()
+            .patch(`/api/users/${(await createUser(app, 'client')).id}`)
+            .set(headers)
+            .send({ name: 'Y' }),
       },
     ];
 
-    it.each(routes)('$name: 401 signed out, 403 for sharpener and client, allowed for owner and office', async (route) => {
-      expect((await route.call({})).status).toBe(401);
-      for (const role of ['sharpener', 'client'] as const) expect((await route.call(bearer(role))).status).toBe(403);
-      for (const role of ['owner', 'office'] as const) {
-        expect([200, 201]).toContain((await route.call(bearer(role))).status);
-      }
-    });
+    it.each(routes)(
+      '$name: 401 signed out, 403 for sharpener and client, allowed for owner and office',
+      async (route) => {
+        expect((await route.call({})).status).toBe(401);
+        for (const role of ['sharpener', 'client'] as const) expect((await route.call(bearer(role))).status).toBe(403);
+        for (const role of ['owner', 'office'] as const) {
+          expect([200, 201]).toContain((await route.call(bearer(role))).status);
+        }
+      },
+    );
   });
 
   describe('GET /api/users', () => {

@@ -1,6 +1,6 @@
 import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from '@keenroute/shared';
 // Mozilla's list of common passwords, kept as an npm package.
-import commonPasswords = require('fxa-common-password-list');
+import commonPasswords from 'fxa-common-password-list';
 
 /** Why a new password is refused, in words for the person choosing it; null when it is acceptable. */
 export function passwordProblem(password: string, email?: string): string | null {

@@ -1,15 +1,5 @@
 import { plainToInstance, Transform } from 'class-transformer';
-import {
-  IsIn,
-  IsInt,
-  IsOptional,
-  IsString,
-  IsUrl,
-  Max,
-  Min,
-  MinLength,
-  validateSync,
-} from 'class-validator';
+import { IsIn, IsInt, IsOptional, IsString, IsUrl, Max, Min, MinLength, validateSync } from 'class-validator';
 
 /** The environment the API reads, with the safe local defaults `npm start` relies on. */
 export class Environment {
@@ -74,14 +64,10 @@ export type AppConfig = Readonly<Environment>;
 /** Validates process.env once at start; a bad variable stops the server with a message naming it. */
 export function validateEnvironment(raw: Record<string, unknown>): AppConfig {
   const known = Object.keys(new Environment());
-  const picked = Object.fromEntries(
-    Object.entries(raw).filter(([key, value]) => known.includes(key) && value !== ''),
-  );
+  const picked = Object.fromEntries(Object.entries(raw).filter(([key, value]) => known.includes(key) && value !== ''));
   const env = plainToInstance(Environment, picked, { exposeDefaultValues: true });
   const errors = validateSync(env, { skipMissingProperties: false });
-  const problems = errors.map(
-    (error) => `${error.property}: ${Object.values(error.constraints ?? {}).join('; ')}`,
-  );
+  const problems = errors.map((error) => `${error.property}: ${Object.values(error.constraints ?? {}).join('; ')}`);
   if (env.NODE_ENV === 'production' && env.JWT_SECRET === new Environment().JWT_SECRET) {
     problems.push('JWT_SECRET: set a secret of your own in production');
   }

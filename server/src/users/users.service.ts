@@ -70,9 +70,11 @@ export class UsersService {
       });
     }
     const { user, secret } = await this.users.manager.transaction(async (manager) => {
-      const created = await manager.getRepository(User).save(
-        manager.getRepository(User).create({ email: dto.email, name: dto.name, role: dto.role, passwordHash: null }),
-      );
+      const created = await manager
+        .getRepository(User)
+        .save(
+          manager.getRepository(User).create({ email: dto.email, name: dto.name, role: dto.role, passwordHash: null }),
+        );
       return { user: created, secret: await this.userTokens.issue(created.id, 'invite', manager) };
     });
     await this.sendInvitation(actor, user, secret);

@@ -31,14 +31,24 @@ describe('AllExceptionsFilter', () => {
     sut.catch(new DomainError('conflict', 'Taken.', { email: ['Taken.'] }), host);
     expect(sent()).toEqual({
       status: 409,
-      body: { statusCode: 409, error: 'Conflict', message: 'Taken.', fields: { email: ['Taken.'] }, requestId: 'req-123' },
+      body: {
+        statusCode: 409,
+        error: 'Conflict',
+        message: 'Taken.',
+        fields: { email: ['Taken.'] },
+        requestId: 'req-123',
+      },
     });
   });
 
   it('keeps the message and fields of Nest HTTP exceptions', () => {
     const { host, sent } = hostCapturing();
     sut.catch(new BadRequestException({ message: 'Some fields need attention.', fields: { a: ['b'] } }), host);
-    expect(sent().body).toMatchObject({ statusCode: 400, message: 'Some fields need attention.', fields: { a: ['b'] } });
+    expect(sent().body).toMatchObject({
+      statusCode: 400,
+      message: 'Some fields need attention.',
+      fields: { a: ['b'] },
+    });
     const second = hostCapturing();
     sut.catch(new NotFoundException(), second.host);
     expect(second.sent().body).toMatchObject({ statusCode: 404, error: 'Not Found' });

@@ -2,12 +2,13 @@ import { ApiProperty } from '@nestjs/swagger';
 import { ROLES, type Role } from '@keenroute/shared';
 import { Transform } from 'class-transformer';
 import { IsEmail, IsIn, IsString, Length, Matches, MaxLength } from 'class-validator';
+import { normalisedEmail } from '../../auth/dto/login.dto';
 
-export const trimmed = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
+export const trimmed = ({ value }: { value: unknown }): unknown => (typeof value === 'string' ? value.trim() : value);
 
 export class InviteUserDto {
   @ApiProperty({ example: 'new.sharpener@demo.keenroute.test' })
-  @Transform(({ value }) => (typeof value === 'string' ? value.trim().toLowerCase() : value))
+  @Transform(normalisedEmail)
   @IsEmail({}, { message: 'Enter a valid e-mail address.' })
   @MaxLength(254)
   email: string;
