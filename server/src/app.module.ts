@@ -14,6 +14,7 @@ import { typeormOptions } from './database/typeorm-options';
 import { DevModule } from './dev/dev.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
+import { RatesModule } from './rates/rates.module';
 import { UsersModule } from './users/users.module';
 
 const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
@@ -66,6 +67,7 @@ const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
     AuthModule,
     HealthModule,
     DevModule,
+    RatesModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: AccessGuard },

@@ -1,4 +1,5 @@
 import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
+import { isRuleError } from '@keenroute/shared';
 import type { Request, Response } from 'express';
 import { DomainError } from '../errors/domain-error';
 import { httpStatusFor } from '../errors/http-status-for';
@@ -37,6 +38,11 @@ export class AllExceptionsFilter implements ExceptionFilter {
     if (exception instanceof DomainError) {
       const statusCode = httpStatusFor(exception.code);
       return { statusCode, error: reason(statusCode), message: exception.message, fields: exception.fields };
+    }
+    if (isRuleError(exception)) {
+      // A trade rule refused the input: the person can fix it, so it is a 400 on the field the rule names.
+      const fields = exception.field ? { [exception.field]: [exception.message] } : undefined;
+      return { statusCode: HttpStatus.BAD_REQUEST, error: reason(400), message: exception.message, fields };
     }
     if (exception instanceof HttpException) {
       const statusCode = exception.getStatus();
