@@ -3,7 +3,7 @@ import globals from 'globals';
 import tseslint from 'typescript-eslint';
 
 export default tseslint.config(
-  { ignores: ['**/dist/**', '**/coverage/**', '.data/**', 'artifacts/**', '**/*.config.js', 'scripts/bootstrap.mjs'] },
+  { ignores: ['**/dist/**', '**/coverage/**', '.data/**', 'artifacts/**', '**/*.config.js', '**/*.config.cjs', 'scripts/bootstrap.mjs'] },
   js.configs.recommended,
   ...tseslint.configs.recommendedTypeChecked,
   {

@@ -1,0 +1,36 @@
+import { screen } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { renderWithProviders } from '@/testing/render';
+import { signInAs } from '@/testing/session';
+import { HomeRoute } from './home';
+
+describe('the home page', () => {
+  it('greets a sharpener, names the role and shows the cautions of the bench', () => {
+    signInAs('sharpener');
+    renderWithProviders(<HomeRoute />);
+    expect(screen.getByRole('heading', { level: 1 })).toHaveTextContent(/^Good (morning|afternoon|evening), Sasha$/);
+    expect(screen.getByText('Sharpener')).toBeInTheDocument();
+    expect(screen.getByRole('heading', { name: 'At the bench' })).toBeInTheDocument();
+    expect(screen.getByText(/too hot to touch means lighter pressure and slower work/)).toBeInTheDocument();
+    expect(screen.getByText(/equipment maker's instructions/)).toBeInTheDocument();
+    expect(screen.queryByRole('link', { name: /team/i })).not.toBeInTheDocument();
+  });
+
+  it('shows a client no bench cautions and no staff pages', () => {
+    signInAs('client');
+    renderWithProviders(<HomeRoute />);
+    expect(screen.queryByRole('heading', { name: 'At the bench' })).not.toBeInTheDocument();
+    expect(screen.getByText(/My shears and their history/)).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'Change your password' })).toHaveAttribute(
+      'href',
+      '/forgot-password?email=client%40demo.keenroute.test',
+    );
+  });
+
+  it('links an owner to the pages they have now', () => {
+    signInAs('owner');
+    renderWithProviders(<HomeRoute />);
+    expect(screen.getByRole('link', { name: /^Team/ })).toHaveAttribute('href', '/team');
+    expect(screen.getByRole('link', { name: /^Outbox/ })).toHaveAttribute('href', '/dev/outbox');
+  });
+});

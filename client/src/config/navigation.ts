@@ -1,0 +1,44 @@
+import type { Role } from '@keenroute/shared';
+import { IconHome2, IconMailOpened, IconUsersGroup, type Icon } from '@tabler/icons-react';
+import { paths } from './paths';
+
+export interface NavItem {
+  label: string;
+  href: string;
+  icon: Icon;
+  roles: readonly Role[];
+  /** What the page lets a person do, for the home page. */
+  summary: string;
+  /** Shown under the label, e.g. to say a page is a development tool. */
+  hint?: string;
+}
+
+// Later features add their pages here; only pages that exist are listed.
+export const NAV_ITEMS: readonly NavItem[] = [
+  {
+    label: 'Home',
+    href: paths.home.getHref(),
+    icon: IconHome2,
+    roles: paths.home.roles,
+    summary: 'Your role, what Keenroute lets you do, and the cautions of the bench.',
+  },
+  {
+    label: 'Team',
+    href: paths.team.getHref(),
+    icon: IconUsersGroup,
+    roles: paths.team.roles,
+    summary: 'Invite sharpeners, office staff and clients, change their roles, deactivate those who have left.',
+  },
+  {
+    label: 'Outbox',
+    href: paths.devOutbox.getHref(),
+    icon: IconMailOpened,
+    roles: paths.devOutbox.roles,
+    hint: 'E-mails caught locally',
+    summary: 'Read the e-mails Keenroute has sent while the local mail catcher runs (development and demo only).',
+  },
+];
+
+export function navItemsFor(role: Role): NavItem[] {
+  return NAV_ITEMS.filter((item) => item.roles.includes(role));
+}
