@@ -3,7 +3,18 @@ import globals from 'globals';
 import tseslint from 'typescript-eslint';
 
 export default tseslint.config(
-  { ignores: ['**/dist/**', '**/coverage/**', '.data/**', 'artifacts/**', '**/*.config.js', '**/*.config.cjs', 'scripts/bootstrap.mjs'] },
+  {
+    ignores: [
+      '**/dist/**',
+      '**/coverage/**',
+      '.data/**',
+      'artifacts/**',
+      '**/*.config.js',
+      '**/*.config.cjs',
+      'scripts/bootstrap.mjs',
+      'eslint.config.mjs',
+    ],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommendedTypeChecked,
   {
