@@ -1,0 +1,72 @@
+import path from 'node:path';
+import { paths } from './paths.js';
+import type { ClusterOptions } from './postgres.js';
+import { mustRunScript, type Workspace } from './workspace.js';
+import { appEnvironment, portFromEnv } from './environment.js';
+import { developmentJwtSecret } from './secrets.js';
+
+export const devDatabase = 'keenroute';
+
+/** The development cluster: .data/postgres on 127.0.0.1:54320 unless PGPORT_KEENROUTE says otherwise. */
+export function devClusterOptions(alreadyRunning: ClusterOptions['alreadyRunning']): ClusterOptions {
+  return {
+    dataDir: paths.devPostgres,
+    port: portFromEnv('PGPORT_KEENROUTE', 54320),
+    logFile: path.join(paths.dataRoot, 'postgres.log'),
+    portHint: 'PGPORT_KEENROUTE=54321 npm start',
+    alreadyRunning,
+  };
+}
+
+/** The development ports: PORT, MAIL_CATCHER_SMTP_PORT and MAIL_CATCHER_HTTP_PORT override them. */
+export function devPorts(): { app: number; smtp: number; outbox: number } {
+  return {
+    app: portFromEnv('PORT', 3000),
+    smtp: portFromEnv('MAIL_CATCHER_SMTP_PORT', 2525),
+    outbox: portFromEnv('MAIL_CATCHER_HTTP_PORT', 1080),
+  };
+}
+
+/** What the API, its migrations and its seed read in development. */
+export function devEnvironment(databaseUrl: string): NodeJS.ProcessEnv {
+  const ports = devPorts();
+  return appEnvironment({
+    mode: 'development',
+    port: ports.app,
+    databaseUrl,
+    jwtSecret: developmentJwtSecret(),
+    smtpPort: ports.smtp,
+    mailCatcherUrl: `http://127.0.0.1:${ports.outbox}`,
+    dataDir: paths.devApp,
+  });
+}
+
+/** Builds the workspaces in dependency order. */
+export async function buildWorkspaces(workspaces: readonly Workspace[], env?: NodeJS.ProcessEnv): Promise<void> {
+  for (const workspace of workspaces) {
+    console.log(`Building ${workspace}…`);
+    await mustRunScript(workspace, 'build', `Fix the ${workspace} build errors above, then run the command again.`, {
+      env,
+    });
+  }
+}
+
+/** TypeORM migrations from server/dist (never synchronize). */
+export async function runMigrations(env: NodeJS.ProcessEnv): Promise<void> {
+  console.log('Running database migrations…');
+  await mustRunScript(
+    'server',
+    'migration:run',
+    'A migration failed: fix it (the error is above). To start the development data over: npm run db:reset',
+    { env, silent: true },
+  );
+}
+
+/** The demo scenario; the seed itself does nothing when the demo data is already there. */
+export async function seedDemoData(env: NodeJS.ProcessEnv): Promise<void> {
+  console.log('Seeding the demo scenario (skipped by the seed when it is already there)…');
+  await mustRunScript('server', 'seed', 'The seed failed: read the error above. To start over: npm run db:reset', {
+    env,
+    silent: true,
+  });
+}
