@@ -65,6 +65,10 @@ async function main(): Promise<void> {
     script('shared', 'build', process.env, buildTimeoutMs),
   );
   await report.step('suite', 'shared (vitest + coverage)', script('shared', 'test', unitEnv));
+  // The same check developers run: every workspace typechecks, ESLint's type-checked rules, Prettier.
+  await report.step('suite', 'check: types, lint, format', () =>
+    runCommand('check', 'npm', ['run', '-s', 'check'], { cwd: repoRoot, env: unitEnv, timeoutMs: suiteTimeoutMs }),
+  );
 
   let cluster: Cluster | undefined;
   let catcher: MailCatcher | undefined;

@@ -35,7 +35,15 @@ const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
             res.setHeader('x-request-id', id);
             return id;
           },
-          redact: ['req.headers.authorization', 'req.headers.cookie', 'res.headers["set-cookie"]'],
+          // One line per request: who, what and how it went; headers stay out (they carry tokens and cookies).
+          serializers: {
+            req: (req: { id: unknown; method: string; url: string }) => ({
+              id: req.id,
+              method: req.method,
+              url: req.url,
+            }),
+            res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+          },
           autoLogging: { ignore: (req) => req.url === '/api/health' },
         },
       }),
