@@ -15,9 +15,9 @@ import {
 
 // PRODUCT.md's navigation plan, limited to the pages that exist now.
 const ROLE_PAGES: Record<Role, { label: string; nav: string[] }> = {
-  owner: { label: 'Owner', nav: ['Home', 'Team', 'Outbox'] },
-  office: { label: 'Office', nav: ['Home', 'Team'] },
-  sharpener: { label: 'Sharpener', nav: ['Home'] },
+  owner: { label: 'Owner', nav: ['Home', 'Edge recipes', 'Team', 'Rates', 'Outbox'] },
+  office: { label: 'Office', nav: ['Home', 'Edge recipes', 'Team', 'Rates'] },
+  sharpener: { label: 'Sharpener', nav: ['Home', 'Edge recipes'] },
   client: { label: 'Client', nav: ['Home'] },
 };
 

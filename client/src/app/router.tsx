@@ -36,6 +36,26 @@ export const routes: RouteObject[] = [
                 lazy: async () => ({ Component: (await import('./routes/home/home')).HomeRoute }),
               },
               {
+                element: <RequireRole roles={paths.edgeRecipes.roles} />,
+                children: [
+                  {
+                    path: paths.edgeRecipes.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/edge-recipes/routes/edge-recipes')).EdgeRecipesRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.rates.roles} />,
+                children: [
+                  {
+                    path: paths.rates.path,
+                    lazy: async () => ({ Component: (await import('@/features/rates/routes/rates')).RatesRoute }),
+                  },
+                ],
+              },
+              {
                 element: <RequireRole roles={paths.team.roles} />,
                 children: [
                   {

@@ -1,5 +1,12 @@
 import type { Role } from '@keenroute/shared';
-import { IconHome2, IconMailOpened, IconUsersGroup, type Icon } from '@tabler/icons-react';
+import {
+  IconHome2,
+  IconListNumbers,
+  IconMailOpened,
+  IconReceipt2,
+  IconUsersGroup,
+  type Icon,
+} from '@tabler/icons-react';
 import { paths } from './paths';
 
 export interface NavItem {
@@ -23,11 +30,27 @@ export const NAV_ITEMS: readonly NavItem[] = [
     summary: 'Your role, what Keenroute lets you do, and the cautions of the bench.',
   },
   {
+    label: 'Edge recipes',
+    href: paths.edgeRecipes.getHref(),
+    icon: IconListNumbers,
+    roles: paths.edgeRecipes.roles,
+    summary:
+      'The bench plan for every edge type and tool kind: abrasive steps, inside edge, finish, minutes and cautions.',
+  },
+  {
     label: 'Team',
     href: paths.team.getHref(),
     icon: IconUsersGroup,
     roles: paths.team.roles,
     summary: 'Invite sharpeners, office staff and clients, change their roles, deactivate those who have left.',
+  },
+  {
+    label: 'Rates',
+    href: paths.rates.getHref(),
+    icon: IconReceipt2,
+    // PRODUCT.md lists Rates under the owner; the office reads them too. Sharpeners reach the page by its address.
+    roles: ['owner', 'office'],
+    summary: 'The price list per pair, add-ons, trip charge and discounts, with a quote preview; the owner edits it.',
   },
   {
     label: 'Outbox',

@@ -16,3 +16,8 @@ export function formatDateTime(iso: string): string {
   const date = new Date(iso);
   return Number.isNaN(date.getTime()) ? '' : dateTimeFormat.format(date);
 }
+
+/** "convex straight shear" → "Convex straight shear", for the start of a heading or cell. */
+export function upperFirst(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}

@@ -11,9 +11,9 @@ import { AppLayout } from './app-layout';
 
 // PRODUCT.md's plan, limited to the pages that exist now.
 const EXPECTED_NAV: Record<Role, string[]> = {
-  owner: ['Home', 'Team', 'Outbox'],
-  office: ['Home', 'Team'],
-  sharpener: ['Home'],
+  owner: ['Home', 'Edge recipes', 'Team', 'Rates', 'Outbox'],
+  office: ['Home', 'Edge recipes', 'Team', 'Rates'],
+  sharpener: ['Home', 'Edge recipes'],
   client: ['Home'],
 };
 

@@ -4,7 +4,7 @@ import type { Role } from '@keenroute/shared';
 export const ROLE_OUTLOOK: Record<Role, string[]> = {
   owner: [
     'Stop earnings: revenue per stop, per route day and per sharpener',
-    'Rates and business settings',
+    'Business settings',
     'Everything the office sees: week plan, stops, customers, tickets and invoices',
   ],
   office: ['Week plan and stops coming due', 'Stops, customers and their shears', 'Drop-offs, tickets and invoices'],
