@@ -29,7 +29,8 @@ export function appEnvironment(settings: AppSettings): NodeJS.ProcessEnv {
     MAIL_CATCHER_URL: settings.mailCatcherUrl,
     CLIENT_DIST: paths.clientDist,
     DATA_DIR: settings.dataDir,
-    LOG_LEVEL: settings.mode === 'test' ? 'warn' : 'info',
+    // Tests refuse requests on purpose by the hundred; only real failures (5xx) belong in their output.
+    LOG_LEVEL: settings.mode === 'test' ? 'error' : 'info',
   };
 }
 
