@@ -17,5 +17,5 @@ async function main(): Promise<void> {
 
 main().catch((error: unknown) => {
   console.error('Seeding failed:', error instanceof Error ? error.message : error);
-  process.exit(1);
+  process.exitCode = 1;
 });
