@@ -6,15 +6,19 @@ import { ThrottlerModule } from '@nestjs/throttler';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { LoggerModule } from 'nestjs-pino';
+import { AccessModule } from './access/access.module';
 import { AuthModule } from './auth/auth.module';
 import { AccessGuard } from './auth/guards/access.guard';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
 import { validateEnvironment, type AppConfig } from './config/environment';
 import { typeormOptions } from './database/typeorm-options';
+import { CustomersModule } from './customers/customers.module';
 import { DevModule } from './dev/dev.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { RatesModule } from './rates/rates.module';
+import { ShearsModule } from './shears/shears.module';
+import { StopsModule } from './stops/stops.module';
 import { UsersModule } from './users/users.module';
 
 const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
@@ -76,6 +80,10 @@ const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
     HealthModule,
     DevModule,
     RatesModule,
+    AccessModule,
+    StopsModule,
+    CustomersModule,
+    ShearsModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: AccessGuard },

@@ -15,6 +15,8 @@ export const RULE_ERROR_CODES = [
   'invalid-bench-minutes',
   'invalid-rate-card',
   'invalid-ticket',
+  'invalid-cadence',
+  'invalid-hours',
 ] as const;
 export type RuleErrorCode = (typeof RULE_ERROR_CODES)[number];
 

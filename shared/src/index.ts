@@ -8,3 +8,4 @@ export * from './grit-scales.js';
 export * from './bench-time.js';
 export * from './recipes/index.js';
 export * from './rates/index.js';
+export * from './registry/index.js';

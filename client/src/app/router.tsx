@@ -56,6 +56,121 @@ export const routes: RouteObject[] = [
                 ],
               },
               {
+                element: <RequireRole roles={paths.stops.list.roles} />,
+                children: [
+                  {
+                    path: paths.stops.list.path,
+                    lazy: async () => ({ Component: (await import('@/features/stops/routes/stops')).StopsRoute }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.stops.create.roles} />,
+                children: [
+                  {
+                    path: paths.stops.create.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/stops/routes/stop-create')).StopCreateRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.stops.detail.roles} />,
+                children: [
+                  {
+                    path: paths.stops.detail.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/stops/routes/stop-detail')).StopDetailRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.stops.edit.roles} />,
+                children: [
+                  {
+                    path: paths.stops.edit.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/stops/routes/stop-edit')).StopEditRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.comingDue.roles} />,
+                children: [
+                  {
+                    path: paths.comingDue.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/stops/routes/coming-due')).ComingDueRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.customers.list.roles} />,
+                children: [
+                  {
+                    path: paths.customers.list.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/customers/routes/customers')).CustomersRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.customers.detail.roles} />,
+                children: [
+                  {
+                    path: paths.customers.detail.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/customers/routes/customer-detail')).CustomerDetailRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.shears.list.roles} />,
+                children: [
+                  {
+                    path: paths.shears.list.path,
+                    lazy: async () => ({ Component: (await import('@/features/shears/routes/shears')).ShearsRoute }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.shears.detail.roles} />,
+                children: [
+                  {
+                    path: paths.shears.detail.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/shears/routes/shear-detail')).ShearDetailRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.shears.mine.roles} />,
+                children: [
+                  {
+                    path: paths.shears.mine.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/shears/routes/my-shears')).MyShearsRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.imports.roles} />,
+                children: [
+                  {
+                    path: paths.imports.path,
+                    lazy: async () => ({ Component: (await import('@/features/imports/routes/imports')).ImportsRoute }),
+                  },
+                ],
+              },
+              {
                 element: <RequireRole roles={paths.team.roles} />,
                 children: [
                   {

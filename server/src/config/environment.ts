@@ -46,8 +46,18 @@ export class Environment {
   @IsString()
   CLIENT_DIST?: string;
 
+  /** Where uploads (shear photos) are kept: outside any folder the web server serves. */
   @IsString()
   DATA_DIR = '.data/app';
+
+  /** An HTTP geocoder of the usual search form (GET {url}/search?q=...&format=json); unset turns look-ups off. */
+  @IsOptional()
+  @IsUrl({ require_tld: false, require_protocol: true })
+  GEOCODER_URL?: string;
+
+  /** The business's IANA time zone: what "today" means for coming-due dates. */
+  @IsString()
+  BUSINESS_TIME_ZONE = 'America/Chicago';
 
   @IsIn(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'])
   LOG_LEVEL = 'info';

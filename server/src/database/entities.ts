@@ -1,7 +1,26 @@
 import { RefreshToken } from '../auth/entities/refresh-token.entity';
 import { UserToken } from '../auth/entities/user-token.entity';
+import { CustomerStopHistory } from '../customers/entities/customer-stop-history.entity';
+import { Customer } from '../customers/entities/customer.entity';
 import { RateCardVersion } from '../rates/entities/rate-card-version.entity';
+import { ShearHistoryEntry } from '../shears/entities/shear-history-entry.entity';
+import { ShearPhoto } from '../shears/entities/shear-photo.entity';
+import { Shear } from '../shears/entities/shear.entity';
+import { StopVisit } from '../stops/entities/stop-visit.entity';
+import { Stop } from '../stops/entities/stop.entity';
 import { User } from '../users/entities/user.entity';
 
 /** Every entity, for the CLI data source; the app registers them through each module's forFeature. */
-export const entities = [User, RefreshToken, UserToken, RateCardVersion];
+export const entities = [
+  User,
+  RefreshToken,
+  UserToken,
+  RateCardVersion,
+  Stop,
+  StopVisit,
+  Customer,
+  CustomerStopHistory,
+  Shear,
+  ShearPhoto,
+  ShearHistoryEntry,
+];

@@ -1,5 +1,10 @@
 import { CreateUsersAndTokens1764633600000 } from './1764633600000-CreateUsersAndTokens';
 import { CreateRateCards1764720000000 } from './1764720000000-CreateRateCards';
+import { CreateRegistry1764806400000 } from './1764806400000-CreateRegistry';
 
 /** Listed explicitly, oldest first, so the CLI, the app and jest load the same migrations without globs. */
-export const migrations = [CreateUsersAndTokens1764633600000, CreateRateCards1764720000000];
+export const migrations = [
+  CreateUsersAndTokens1764633600000,
+  CreateRateCards1764720000000,
+  CreateRegistry1764806400000,
+];

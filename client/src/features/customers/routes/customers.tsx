@@ -1,0 +1,5 @@
+import { PageHeader } from '@/components/page-header';
+
+export function CustomersRoute() {
+  return <PageHeader title="Customers" description="Being built." />;
+}

@@ -1,0 +1,5 @@
+import { PageHeader } from '@/components/page-header';
+
+export function StopDetailRoute() {
+  return <PageHeader title="Stop" description="Being built." />;
+}

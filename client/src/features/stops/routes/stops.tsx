@@ -1,0 +1,5 @@
+import { PageHeader } from '@/components/page-header';
+
+export function StopsRoute() {
+  return <PageHeader title="Stops" description="Being built." />;
+}
