@@ -13,12 +13,14 @@ import {
   type Browser,
 } from './browser';
 
+const REGISTRY_PAGES = ['Home', 'Coming due', 'Stops', 'Customers', 'Shears'];
+
 // PRODUCT.md's navigation plan, limited to the pages that exist now.
 const ROLE_PAGES: Record<Role, { label: string; nav: string[] }> = {
-  owner: { label: 'Owner', nav: ['Home', 'Edge recipes', 'Team', 'Rates', 'Outbox'] },
-  office: { label: 'Office', nav: ['Home', 'Edge recipes', 'Team', 'Rates'] },
-  sharpener: { label: 'Sharpener', nav: ['Home', 'Edge recipes'] },
-  client: { label: 'Client', nav: ['Home'] },
+  owner: { label: 'Owner', nav: [...REGISTRY_PAGES, 'Import', 'Edge recipes', 'Team', 'Rates', 'Outbox'] },
+  office: { label: 'Office', nav: [...REGISTRY_PAGES, 'Import', 'Edge recipes', 'Team', 'Rates'] },
+  sharpener: { label: 'Sharpener', nav: [...REGISTRY_PAGES, 'Edge recipes'] },
+  client: { label: 'Client', nav: ['Home', 'My shears'] },
 };
 
 describe('each demo role in a browser', () => {

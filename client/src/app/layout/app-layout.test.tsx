@@ -10,11 +10,12 @@ import { RequireAuth } from '@/features/auth/components/require-auth';
 import { AppLayout } from './app-layout';
 
 // PRODUCT.md's plan, limited to the pages that exist now.
+const REGISTRY = ['Home', 'Coming due', 'Stops', 'Customers', 'Shears'];
 const EXPECTED_NAV: Record<Role, string[]> = {
-  owner: ['Home', 'Edge recipes', 'Team', 'Rates', 'Outbox'],
-  office: ['Home', 'Edge recipes', 'Team', 'Rates'],
-  sharpener: ['Home', 'Edge recipes'],
-  client: ['Home'],
+  owner: [...REGISTRY, 'Import', 'Edge recipes', 'Team', 'Rates', 'Outbox'],
+  office: [...REGISTRY, 'Import', 'Edge recipes', 'Team', 'Rates'],
+  sharpener: [...REGISTRY, 'Edge recipes'],
+  client: ['Home', 'My shears'],
 };
 
 function renderShell() {

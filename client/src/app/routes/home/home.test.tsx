@@ -20,7 +20,8 @@ describe('the home page', () => {
     signInAs('client');
     renderWithProviders(<HomeRoute />);
     expect(screen.queryByRole('heading', { name: 'At the bench' })).not.toBeInTheDocument();
-    expect(screen.getByText(/My shears and their history/)).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: /^My shears/ })).toHaveAttribute('href', '/my-shears');
+    expect(screen.getByText(/Book a drop-off/)).toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Change your password' })).toHaveAttribute(
       'href',
       '/forgot-password?email=client%40demo.keenroute.test',

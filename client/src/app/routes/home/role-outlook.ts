@@ -5,16 +5,15 @@ export const ROLE_OUTLOOK: Record<Role, string[]> = {
   owner: [
     'Stop earnings: revenue per stop, per route day and per sharpener',
     'Business settings',
-    'Everything the office sees: week plan, stops, customers, tickets and invoices',
+    'The week plan, tickets and invoices the office will see',
   ],
-  office: ['Week plan and stops coming due', 'Stops, customers and their shears', 'Drop-offs, tickets and invoices'],
+  office: ['Week plan: route days proposed from the stops coming due', 'Drop-offs, tickets and invoices'],
   sharpener: [
     'Today: the day sheet on your phone, stops in order with arrival times',
-    'My week and the stops on my days',
+    'My week: the route days planned for you',
     'Tickets: shears, edge recipes and payments taken on site',
   ],
   client: [
-    'My shears and their history',
     'Book a drop-off for the next route day, or mail-in',
     'My invoices, paid online',
   ],
