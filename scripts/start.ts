@@ -13,6 +13,7 @@ import { paths, repoRoot, shown } from './lib/paths.js';
 import { ensureDatabase, ensurePostgres, startCluster } from './lib/postgres.js';
 import { assertPortFree, spawnManaged, stopOnSignals, Teardown, waitForHttp } from './lib/processes.js';
 import { describeFailure, SetupError } from './lib/setup-error.js';
+import { startGeocoder } from './stand-ins/geocoder.js';
 import { startMailCatcher } from './stand-ins/mail-catcher.js';
 
 const demoSignIns = [
@@ -26,11 +27,12 @@ const teardown = new Teardown();
 stopOnSignals(teardown);
 
 async function main(): Promise<void> {
-  const { app: appPort, smtp: smtpPort, outbox: outboxPort } = devPorts();
+  const { app: appPort, smtp: smtpPort, outbox: outboxPort, geocoder: geocoderPort } = devPorts();
   // Checked before the slow steps, so a second `npm start` says so at once.
   await assertPortFree(appPort, 'Keenroute', `PORT=${appPort + 1} npm start`);
   await assertPortFree(smtpPort, "the mail catcher's SMTP side", `MAIL_CATCHER_SMTP_PORT=${smtpPort + 1} npm start`);
   await assertPortFree(outboxPort, "the mail catcher's HTTP API", `MAIL_CATCHER_HTTP_PORT=${outboxPort + 1} npm start`);
+  await assertPortFree(geocoderPort, 'the geocoder stand-in', `GEOCODER_PORT=${geocoderPort + 1} npm start`);
 
   await ensurePostgres();
   const cluster = await startCluster(devClusterOptions('take-over'));
@@ -45,6 +47,8 @@ async function main(): Promise<void> {
 
   const catcher = await startMailCatcher({ smtpPort, httpPort: outboxPort, host: '127.0.0.1' });
   teardown.add('stop the mail catcher', () => catcher.stop());
+  const geocoder = await startGeocoder({ port: geocoderPort, host: '127.0.0.1' });
+  teardown.add('stop the geocoder stand-in', () => geocoder.stop());
 
   const env = devEnvironment(cluster.url(devDatabase));
   await runMigrations(env);
@@ -60,13 +64,14 @@ async function main(): Promise<void> {
       '',
       `Keenroute is running:  ${origin}`,
       `  Outbox (e-mail caught on this machine): ${catcher.url}/messages  (owners also see it in the app)`,
+      `  Geocoder stand-in (knows the invented demo city's addresses): ${geocoder.url}/search?q=...&format=json`,
       `  API docs: ${origin}/api/docs`,
       `  Database: ${cluster.url(devDatabase)}  (data in ${shown(cluster.dataDir)}; reset with npm run db:reset)`,
       '',
       '  Demo sign-ins, password keenroute-demo (demo data only: change these before real use):',
       ...demoSignIns.map(([role, email]) => `    ${role.padEnd(10)} ${email}`),
       '',
-      'Press Ctrl-C to stop the API, the mail catcher and PostgreSQL.',
+      'Press Ctrl-C to stop the API, the mail catcher, the geocoder stand-in and PostgreSQL.',
       '',
     ].join('\n'),
   );

@@ -9,6 +9,7 @@ import { freePort, runCommand, spawnManaged, stopOnSignals, Teardown, waitForHtt
 import { throwawayJwtSecret } from './lib/secrets.js';
 import { SuiteReport } from './lib/suite-report.js';
 import { runScript, type Workspace } from './lib/workspace.js';
+import { startGeocoder, type Geocoder } from './stand-ins/geocoder.js';
 import { startMailCatcher, type MailCatcher } from './stand-ins/mail-catcher.js';
 
 const suiteTimeoutMs = 15 * 60_000;
@@ -46,11 +47,11 @@ async function startTestCluster(): Promise<Cluster> {
 }
 
 async function main(): Promise<void> {
-  await report.step('suite', 'scripts: mail catcher (node:test)', () =>
+  await report.step('suite', 'scripts: mail catcher, geocoder (node:test)', () =>
     runCommand(
       'scripts',
       path.join(repoRoot, 'node_modules', '.bin', 'tsx'),
-      ['--test', 'scripts/stand-ins/mail-catcher.test.ts'],
+      ['--test', 'scripts/stand-ins/mail-catcher.test.ts', 'scripts/stand-ins/geocoder.test.ts'],
       {
         cwd: repoRoot,
         env: unitEnv,
@@ -72,6 +73,7 @@ async function main(): Promise<void> {
 
   let cluster: Cluster | undefined;
   let catcher: MailCatcher | undefined;
+  let geocoder: Geocoder | undefined;
   await report.step('setup', 'test PostgreSQL + keenroute_test', async () => {
     cluster = await startTestCluster();
     await ensureDatabase(cluster, 'keenroute_test');
@@ -80,6 +82,11 @@ async function main(): Promise<void> {
     catcher = await startMailCatcher({ smtpPort: 0, httpPort: 0, host: '127.0.0.1' });
     teardown.add('stop the mail catcher', () => catcher?.stop());
     console.log(`Mail catcher: SMTP 127.0.0.1:${catcher.smtpPort}, API ${catcher.url}`);
+  });
+  await report.step('setup', 'geocoder stand-in', async () => {
+    geocoder = await startGeocoder({ port: 0, host: '127.0.0.1' });
+    teardown.add('stop the geocoder stand-in', () => geocoder?.stop());
+    console.log(`Geocoder stand-in: ${geocoder.url}`);
   });
 
   const jwtSecret = throwawayJwtSecret();
@@ -92,18 +99,19 @@ async function main(): Promise<void> {
       jwtSecret,
       smtpPort: catcher!.smtpPort,
       mailCatcherUrl: catcher!.url,
+      geocoderUrl: geocoder!.url,
       dataDir: paths.testApp,
     });
 
   await report.step('suite', 'server unit (jest)', script('server', 'test', unitEnv));
-  if (cluster && catcher) {
+  if (cluster && catcher && geocoder) {
     await report.step(
       'suite',
       'server e2e (jest + supertest)',
       script('server', 'test:e2e', testEnv('keenroute_test', await freePort())),
     );
   } else {
-    report.blocked('server e2e (jest + supertest)', 'the test PostgreSQL or the mail catcher did not start');
+    report.blocked('server e2e (jest + supertest)', 'the test PostgreSQL or a stand-in did not start');
   }
   await report.step('suite', 'client (vitest)', script('client', 'test', unitEnv));
 
@@ -117,8 +125,8 @@ async function main(): Promise<void> {
     'build client',
     script('client', 'build', process.env, buildTimeoutMs),
   );
-  if (!(sharedBuilt && serverBuilt && clientBuilt && cluster && catcher)) {
-    report.blocked('browser (playwright-core + Chromium)', 'a build, the test PostgreSQL or the mail catcher failed');
+  if (!(sharedBuilt && serverBuilt && clientBuilt && cluster && catcher && geocoder)) {
+    report.blocked('browser (playwright-core + Chromium)', 'a build, the test PostgreSQL or a stand-in failed');
     return;
   }
 

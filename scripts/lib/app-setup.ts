@@ -18,12 +18,13 @@ export function devClusterOptions(alreadyRunning: ClusterOptions['alreadyRunning
   };
 }
 
-/** The development ports: PORT, MAIL_CATCHER_SMTP_PORT and MAIL_CATCHER_HTTP_PORT override them. */
-export function devPorts(): { app: number; smtp: number; outbox: number } {
+/** The development ports: PORT, MAIL_CATCHER_SMTP_PORT, MAIL_CATCHER_HTTP_PORT and GEOCODER_PORT override them. */
+export function devPorts(): { app: number; smtp: number; outbox: number; geocoder: number } {
   return {
     app: portFromEnv('PORT', 3000),
     smtp: portFromEnv('MAIL_CATCHER_SMTP_PORT', 2525),
     outbox: portFromEnv('MAIL_CATCHER_HTTP_PORT', 1080),
+    geocoder: portFromEnv('GEOCODER_PORT', 1090),
   };
 }
 
@@ -37,6 +38,7 @@ export function devEnvironment(databaseUrl: string): NodeJS.ProcessEnv {
     jwtSecret: developmentJwtSecret(),
     smtpPort: ports.smtp,
     mailCatcherUrl: `http://127.0.0.1:${ports.outbox}`,
+    geocoderUrl: `http://127.0.0.1:${ports.geocoder}`,
     dataDir: paths.devApp,
   });
 }

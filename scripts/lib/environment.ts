@@ -9,6 +9,8 @@ export interface AppSettings {
   jwtSecret: string;
   smtpPort: number;
   mailCatcherUrl: string;
+  /** The geocoder stand-in (or a real geocoder of the same search form). */
+  geocoderUrl: string;
   dataDir: string;
 }
 
@@ -27,6 +29,7 @@ export function appEnvironment(settings: AppSettings): NodeJS.ProcessEnv {
     SMTP_PORT: String(settings.smtpPort),
     MAIL_FROM: 'Keenroute (demo) <no-reply@demo.keenroute.test>',
     MAIL_CATCHER_URL: settings.mailCatcherUrl,
+    GEOCODER_URL: settings.geocoderUrl,
     CLIENT_DIST: paths.clientDist,
     DATA_DIR: settings.dataDir,
     // Tests refuse requests on purpose by the hundred; only real failures (5xx) belong in their output.

@@ -14,6 +14,7 @@ import { validateEnvironment, type AppConfig } from './config/environment';
 import { typeormOptions } from './database/typeorm-options';
 import { CustomersModule } from './customers/customers.module';
 import { DevModule } from './dev/dev.module';
+import { GeocodingModule } from './geocoding/geocoding.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { RatesModule } from './rates/rates.module';
@@ -84,6 +85,7 @@ const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
     StopsModule,
     CustomersModule,
     ShearsModule,
+    GeocodingModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: AccessGuard },

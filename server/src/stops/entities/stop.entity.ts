@@ -5,6 +5,17 @@ import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateCol
 export const GEOCODE_STATUSES = ['none', 'found', 'picked', 'manual', 'ambiguous', 'failed'] as const;
 export type GeocodeStatus = (typeof GEOCODE_STATUSES)[number];
 
+/** node-postgres reads a date[] as Dates at local midnight (TypeORM converts only plain date columns): back to text. */
+const calendarDates = {
+  to: (value: string[] | undefined) => value,
+  from: (value: (string | Date)[] | null): string[] =>
+    (value ?? []).map((day) =>
+      typeof day === 'string'
+        ? day
+        : `${day.getFullYear()}-${String(day.getMonth() + 1).padStart(2, '0')}-${String(day.getDate()).padStart(2, '0')}`,
+    ),
+};
+
 @Entity({ name: 'stops' })
 export class Stop {
   @PrimaryGeneratedColumn('uuid')
@@ -51,7 +62,7 @@ export class Stop {
   openingHours: OpeningHours;
 
   /** Calendar dates "YYYY-MM-DD" the stop is shut (holidays, refits). */
-  @Column({ name: 'closed_dates', type: 'date', array: true, default: [] })
+  @Column({ name: 'closed_dates', type: 'date', array: true, default: [], transformer: calendarDates })
   closedDates: string[];
 
   @Column({ name: 'cadence_weeks', type: 'smallint' })
