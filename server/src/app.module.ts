@@ -16,6 +16,7 @@ import { CustomersModule } from './customers/customers.module';
 import { DevModule } from './dev/dev.module';
 import { GeocodingModule } from './geocoding/geocoding.module';
 import { HealthModule } from './health/health.module';
+import { ImportsModule } from './imports/imports.module';
 import { MailModule } from './mail/mail.module';
 import { RatesModule } from './rates/rates.module';
 import { ShearsModule } from './shears/shears.module';
@@ -86,6 +87,7 @@ const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
     CustomersModule,
     ShearsModule,
     GeocodingModule,
+    ImportsModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: AccessGuard },

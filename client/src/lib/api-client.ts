@@ -14,6 +14,8 @@ export interface RequestOptions {
   auth?: boolean;
   /** On a 401, refresh the session once and retry (default: same as auth). */
   retryOn401?: boolean;
+  /** Read the answer as a Blob (images, PDFs) instead of JSON. */
+  responseType?: 'json' | 'blob';
 }
 
 type RefreshOutcome = 'ok' | 'refused' | 'unreachable';
@@ -57,14 +59,17 @@ function buildUrl(path: string, query?: Query): string {
 }
 
 async function send(path: string, options: RequestOptions, token: string | null): Promise<Response> {
-  const headers: Record<string, string> = { Accept: 'application/json' };
-  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  // A FormData body is multipart: the browser sets its Content-Type with the boundary.
+  const multipart = options.body instanceof FormData;
+  const headers: Record<string, string> = { Accept: options.responseType === 'blob' ? '*/*' : 'application/json' };
+  if (options.body !== undefined && !multipart) headers['Content-Type'] = 'application/json';
   if (token) headers.Authorization = `Bearer ${token}`;
   try {
     return await fetch(buildUrl(path, options.query), {
       method: options.method ?? 'GET',
       headers,
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body:
+        options.body === undefined ? undefined : multipart ? (options.body as FormData) : JSON.stringify(options.body),
       credentials: 'same-origin',
       signal: options.signal,
     });
@@ -103,6 +108,7 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
   }
 
   if (!response.ok) throw await ApiError.fromResponse(response);
+  if (options.responseType === 'blob') return (await response.blob()) as T;
   return readBody<T>(response);
 }
 
@@ -114,4 +120,12 @@ export const api = {
     apiRequest<T>(path, { ...options, method: 'PATCH', body }),
   put: <T>(path: string, body?: unknown, options?: Omit<RequestOptions, 'method' | 'body'>) =>
     apiRequest<T>(path, { ...options, method: 'PUT', body }),
+  delete: <T = void>(path: string, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+    apiRequest<T>(path, { ...options, method: 'DELETE' }),
+  /** An image or a PDF, fetched with the auth header (an <img src> or a link cannot send it). */
+  blob: (path: string, options?: Omit<RequestOptions, 'method' | 'body' | 'responseType'>) =>
+    apiRequest<Blob>(path, { ...options, responseType: 'blob' }),
+  /** A multipart form (file uploads); the server's refusal comes back as an ApiError like any other. */
+  upload: <T>(path: string, form: FormData, options?: Omit<RequestOptions, 'method' | 'body'>) =>
+    apiRequest<T>(path, { ...options, method: 'POST', body: form }),
 };

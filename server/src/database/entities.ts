@@ -2,6 +2,7 @@ import { RefreshToken } from '../auth/entities/refresh-token.entity';
 import { UserToken } from '../auth/entities/user-token.entity';
 import { CustomerStopHistory } from '../customers/entities/customer-stop-history.entity';
 import { Customer } from '../customers/entities/customer.entity';
+import { CsvImport } from '../imports/entities/csv-import.entity';
 import { RateCardVersion } from '../rates/entities/rate-card-version.entity';
 import { ShearHistoryEntry } from '../shears/entities/shear-history-entry.entity';
 import { ShearPhoto } from '../shears/entities/shear-photo.entity';
@@ -23,4 +24,5 @@ export const entities = [
   Shear,
   ShearPhoto,
   ShearHistoryEntry,
+  CsvImport,
 ];

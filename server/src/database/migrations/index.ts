@@ -1,10 +1,12 @@
 import { CreateUsersAndTokens1764633600000 } from './1764633600000-CreateUsersAndTokens';
 import { CreateRateCards1764720000000 } from './1764720000000-CreateRateCards';
 import { CreateRegistry1764806400000 } from './1764806400000-CreateRegistry';
+import { CreateCsvImports1764806400001 } from './1764806400001-CreateCsvImports';
 
 /** Listed explicitly, oldest first, so the CLI, the app and jest load the same migrations without globs. */
 export const migrations = [
   CreateUsersAndTokens1764633600000,
   CreateRateCards1764720000000,
   CreateRegistry1764806400000,
+  CreateCsvImports1764806400001,
 ];
