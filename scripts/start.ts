@@ -21,6 +21,7 @@ const demoSignIns = [
   ['office', 'office@demo.keenroute.test'],
   ['sharpener', 'sharpener@demo.keenroute.test'],
   ['client', 'client@demo.keenroute.test'],
+  ['client (shop manager)', 'manager@demo.keenroute.test'],
 ] as const;
 
 const teardown = new Teardown();
