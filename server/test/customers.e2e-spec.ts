@@ -198,6 +198,8 @@ describe('customers (e2e)', () => {
       const mailIn = await http().patch(`/api/customers/${id}`).set(as('owner')).send({ stopId: null }).expect(200);
       expect(mailIn.body.stop).toBeNull();
       expect(mailIn.body.notes).toBe('Left side chair');
+      const cleared = await http().patch(`/api/customers/${id}`).set(as('office')).send({ notes: null }).expect(200);
+      expect(cleared.body.notes).toBe('');
       const rows = await app.get(DataSource).getRepository(CustomerStopHistory).findBy({ customerId: id });
       expect(rows).toHaveLength(2);
       expect(rows.every((row) => row.endedAt !== null)).toBe(true);

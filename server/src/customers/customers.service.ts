@@ -124,7 +124,7 @@ export class CustomersService {
       phone: dto.phone === undefined ? customer.phone : dto.phone,
       stopId: dto.stopId === undefined ? customer.stopId : dto.stopId,
       userId: dto.userId === undefined ? customer.userId : dto.userId,
-      notes: dto.notes ?? customer.notes,
+      notes: dto.notes === undefined ? customer.notes : (dto.notes ?? ''),
       visitNoticeConsent: dto.visitNoticeConsent ?? customer.visitNoticeConsent,
       active: dto.active ?? customer.active,
     });

@@ -55,7 +55,7 @@ export class CreateCustomerDto {
   @IsOptional()
   @IsString()
   @MaxLength(2000, { message: 'Notes have at most 2000 characters.' })
-  notes?: string;
+  notes?: string | null;
 
   @ApiPropertyOptional({ description: 'They agreed to e-mailed visit notices' })
   @IsOptional()

@@ -1,0 +1,37 @@
+import { useDebouncedCallback } from '@mantine/hooks';
+import { useEffect, useRef, useState } from 'react';
+
+/** A search box that follows the URL's q (back and forward) and sends what is typed after a pause. */
+export function useSearchBox(q: string, onSearch: (q: string) => void) {
+  const [text, setText] = useState(q);
+  // The q this box last sent: when the URL echoes it back, the person may have typed on meanwhile.
+  const sent = useRef(q);
+  const search = (value: string) => {
+    sent.current = value;
+    onSearch(value);
+  };
+  const send = useDebouncedCallback((value: string) => search(value.trim()), 300);
+  useEffect(() => {
+    if (q === sent.current) return;
+    sent.current = q;
+    setText(q);
+  }, [q]);
+
+  return {
+    text,
+    change: (value: string) => {
+      setText(value);
+      send(value);
+    },
+    /** Sends now (Enter), without waiting for the pause. */
+    flush: () => {
+      send.cancel();
+      search(text.trim());
+    },
+    clear: () => {
+      send.cancel();
+      setText('');
+      search('');
+    },
+  };
+}

@@ -1,0 +1,21 @@
+import { Badge } from '@mantine/core';
+import { SHEAR_STATUS_LABELS, type ShearStatus } from '@keenroute/shared';
+import { upperFirst } from '@/lib/format';
+import { STATUS_COLORS } from '../labels';
+
+export function ShearStatusBadge({ status }: { status: ShearStatus }) {
+  return (
+    <Badge color={STATUS_COLORS[status]} variant={status === 'in-service' ? 'light' : 'outline'} radius="sm">
+      {upperFirst(SHEAR_STATUS_LABELS[status])}
+    </Badge>
+  );
+}
+
+/** Right-handed is the default; only the exception earns a badge. */
+export function LeftHandedBadge() {
+  return (
+    <Badge color="brass" variant="light" radius="sm">
+      Left-handed
+    </Badge>
+  );
+}
