@@ -13,8 +13,5 @@ export const ROLE_OUTLOOK: Record<Role, string[]> = {
     'My week: the route days planned for you',
     'Tickets: shears, edge recipes and payments taken on site',
   ],
-  client: [
-    'Book a drop-off for the next route day, or mail-in',
-    'My invoices, paid online',
-  ],
+  client: ['Book a drop-off for the next route day, or mail-in', 'My invoices, paid online'],
 };

@@ -1,0 +1,39 @@
+import { Switch, Textarea } from '@mantine/core';
+import type { StopFormState } from '../../hooks/use-stop-form';
+import type { Ref } from '../../types';
+import { SharpenerSelect } from '../sharpener-select';
+import { FormSection } from './form-section';
+
+export function AccessNoteFields({ state }: { state: StopFormState }) {
+  const { form } = state;
+  return (
+    <FormSection title="Access notes" description="What the sharpener needs on arrival.">
+      <Textarea label="Parking" rows={2} maxLength={500} {...form.getInputProps('accessParking')} />
+      <Textarea label="Door" rows={2} maxLength={500} {...form.getInputProps('accessDoor')} />
+      <Textarea label="Best time" rows={2} maxLength={500} {...form.getInputProps('accessBestTime')} />
+    </FormSection>
+  );
+}
+
+export function AssignmentFields({ state, current }: { state: StopFormState; current: Ref | null }) {
+  const { form } = state;
+  return (
+    <FormSection title="Sharpener and status">
+      <SharpenerSelect
+        label="Assigned sharpener"
+        placeholder="Not assigned"
+        current={current}
+        maw={420}
+        value={form.values.assignedSharpenerId}
+        onChange={(userId) => form.setFieldValue('assignedSharpenerId', userId)}
+        error={form.errors.assignedSharpenerId}
+      />
+      <Switch
+        size="md"
+        label="Active"
+        description="An inactive stop stays on record but leaves coming due and the route."
+        {...form.getInputProps('active', { type: 'checkbox' })}
+      />
+    </FormSection>
+  );
+}
