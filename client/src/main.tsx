@@ -4,6 +4,7 @@ import '@fontsource/inter/600.css';
 import '@fontsource/inter/700.css';
 import '@mantine/core/styles.css';
 import '@mantine/notifications/styles.css';
+import '@mantine/dates/styles.css';
 import '@mantine/dropzone/styles.css';
 import './app/global.css';
 import { StrictMode } from 'react';

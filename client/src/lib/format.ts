@@ -7,6 +7,7 @@ const dateTimeFormat = new Intl.DateTimeFormat('en', {
   minute: '2-digit',
 });
 
+/** An instant (a timestamp) as a date in the reader's zone; a calendar date "YYYY-MM-DD" needs a day formatter instead. */
 export function formatDate(iso: string): string {
   const date = new Date(iso);
   return Number.isNaN(date.getTime()) ? '' : dateFormat.format(date);

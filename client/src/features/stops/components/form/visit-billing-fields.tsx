@@ -1,6 +1,5 @@
 import { Chip, Group, Input, NumberInput, Radio, SimpleGrid, Stack } from '@mantine/core';
 import { DatePickerInput } from '@mantine/dates';
-import '@mantine/dates/styles.css';
 import { useMediaQuery } from '@mantine/hooks';
 import {
   CADENCE_WEEKS_MAX,
