@@ -81,6 +81,21 @@ describe('users, invitations and password resets (e2e)', () => {
       expect(page.body.items[0]).not.toHaveProperty('passwordHash');
     });
 
+    it('keeps only the roles a picker asks for', async () => {
+      const tag = randomUUID().slice(0, 6);
+      await createUser(app, 'client', { name: `Manager ${tag}` });
+      await createUser(app, 'sharpener', { name: `Sharpener ${tag}` });
+      await createUser(app, 'office', { name: `Office ${tag}` });
+      const pick = async (roles: string) =>
+        (await http().get('/api/users').query({ q: tag, roles }).set(bearer('office')).expect(200)).body.items.map(
+          (u: { role: string }) => u.role,
+        );
+      expect(await pick('client')).toEqual(['client']);
+      expect((await pick('sharpener, office')).sort()).toEqual(['office', 'sharpener']);
+      const bad = await http().get('/api/users').query({ roles: 'client,chef' }).set(bearer('office')).expect(400);
+      expect(bad.body.fields.roles[0]).toMatch(/roles lists roles from/);
+    });
+
     it('answers bad paging with 400 and field messages', async () => {
       const response = await http().get('/api/users').query({ pageSize: 1000, sort: 'password' }).set(bearer('owner'));
       expect(response.status).toBe(400);

@@ -33,6 +33,7 @@ export class UsersService {
     if (query.q) {
       builder.where('(user.name ILIKE :q OR user.email ILIKE :q)', { q: likePattern(query.q) });
     }
+    if (query.roles?.length) builder.andWhere('user.role IN (:...roles)', { roles: query.roles });
     const [items, total] = await builder
       .orderBy(SORT_COLUMNS[query.sort], query.order === 'desc' ? 'DESC' : 'ASC')
       .addOrderBy('user.id', 'ASC')

@@ -43,6 +43,8 @@ export interface StopFormValues {
   accessDoor: string;
   accessBestTime: string;
   assignedSharpenerId: string | null;
+  /** The shop manager's client account: they see every customer and shear of the stop. */
+  managerUserId: string | null;
   active: boolean;
 }
 
@@ -122,6 +124,7 @@ export function emptyStopValues(): StopFormValues {
     accessDoor: '',
     accessBestTime: '',
     assignedSharpenerId: null,
+    managerUserId: null,
     active: true,
   };
 }
@@ -149,6 +152,7 @@ export function stopToValues(stop: StopDetail): StopFormValues {
     accessDoor: stop.accessDoor,
     accessBestTime: stop.accessBestTime,
     assignedSharpenerId: stop.assignedSharpener?.id ?? null,
+    managerUserId: stop.manager?.id ?? null,
     active: stop.active,
   };
 }
@@ -194,6 +198,7 @@ export function valuesToInput(values: StopFormValues, { saved, picked }: InputOp
     accessDoor: trimmed(values.accessDoor),
     accessBestTime: trimmed(values.accessBestTime),
     assignedSharpenerId: values.assignedSharpenerId,
+    managerUserId: values.managerUserId,
     active: values.active,
   };
   const { latitude, longitude } = values;

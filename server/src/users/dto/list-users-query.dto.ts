@@ -1,4 +1,6 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
+import { ROLES, type Role } from '@keenroute/shared';
+import { Transform } from 'class-transformer';
 import { IsIn, IsOptional } from 'class-validator';
 import { PageQueryDto } from '../../common/pagination.dto';
 
@@ -9,4 +11,13 @@ export class ListUsersQueryDto extends PageQueryDto {
   @IsOptional()
   @IsIn(USER_SORTS)
   sort: (typeof USER_SORTS)[number] = 'name';
+
+  /** Pickers ask for the people who can fill a place: "sharpener,owner" to work a stop, "client" to manage one. */
+  @ApiPropertyOptional({ description: 'Comma-separated roles to keep', example: 'sharpener,owner' })
+  @IsOptional()
+  @Transform(({ value }: { value: unknown }) =>
+    typeof value === 'string' ? value.split(',').map((role) => role.trim()) : value,
+  )
+  @IsIn(ROLES, { each: true, message: `roles lists roles from ${ROLES.join(', ')}, separated by commas.` })
+  roles?: Role[];
 }

@@ -20,7 +20,10 @@ export function sharpenersOf(users: StaffMember[]): StaffMember[] {
 }
 
 export async function getStaff(signal?: AbortSignal): Promise<StaffMember[]> {
-  const page = await api.get<Page<StaffMember>>('/users', { query: { pageSize: 100, sort: 'name' }, signal });
+  const page = await api.get<Page<StaffMember>>('/users', {
+    query: { pageSize: 100, sort: 'name', roles: 'sharpener,owner' },
+    signal,
+  });
   return sharpenersOf(page.items);
 }
 

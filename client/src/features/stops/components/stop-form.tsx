@@ -46,7 +46,7 @@ export function StopForm({ stop, initialGeocoding }: StopFormProps) {
         <VisitFields state={state} />
         <BillingFields state={state} />
         <AccessNoteFields state={state} />
-        <AssignmentFields state={state} current={stop?.assignedSharpener ?? null} />
+        <AssignmentFields state={state} current={stop?.assignedSharpener ?? null} manager={stop?.manager ?? null} />
         <Group justify="flex-end" gap="sm">
           <Button variant="default" component={Link} to={cancelHref} style={{ flex: '1 1 8rem', maxWidth: '14rem' }}>
             Cancel

@@ -189,6 +189,40 @@ describe('the stop form', { timeout: 60_000 }, () => {
     expect(server.callsTo('GET', '/api/stops/s-maple')).toHaveLength(1);
   });
 
+  it('makes a client account the shop manager, asking the server for client accounts only', async () => {
+    const server = mockApi({
+      'GET /api/users': (request: MockRequest) =>
+        request.search.get('roles') === 'client'
+          ? {
+              status: 200,
+              body: {
+                items: [
+                  {
+                    id: 'u-rin',
+                    name: 'Rin Manager',
+                    email: 'rin@demo.keenroute.test',
+                    role: 'client',
+                    status: 'active',
+                  },
+                ],
+                total: 1,
+              },
+            }
+          : staffList,
+      'GET /api/stops/s-maple': { status: 200, body: detail() },
+      'PATCH /api/stops/s-maple': { status: 200, body: saved({ status: 'unchanged' }) },
+    });
+    const { user } = renderForm('/stops/s-maple/edit');
+    await user.click(await screen.findByRole('combobox', { name: /^Shop manager/ }));
+    await user.click(await screen.findByRole('option', { name: 'Rin Manager' }));
+    await user.click(screen.getByText('Save the stop'));
+
+    await waitFor(() => expect(server.callsTo('PATCH', '/api/stops/s-maple')).toHaveLength(1));
+    expect(server.callsTo('PATCH', '/api/stops/s-maple')[0]?.body).toMatchObject({ managerUserId: 'u-rin' });
+    const rolesAsked = server.callsTo('GET', '/api/users').map((call) => call.search.get('roles'));
+    expect(rolesAsked).toEqual(expect.arrayContaining(['client', 'sharpener,owner']));
+  });
+
   it('finds the address on the map before saving and sends the picked pin', async () => {
     const server = mockApi({
       'GET /api/users': staffList,

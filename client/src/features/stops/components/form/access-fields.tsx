@@ -1,6 +1,7 @@
 import { Switch, Textarea } from '@mantine/core';
 import type { StopFormState } from '../../hooks/use-stop-form';
 import type { Ref } from '../../types';
+import { ManagerSelect } from '../manager-select';
 import { SharpenerSelect } from '../sharpener-select';
 import { FormSection } from './form-section';
 
@@ -15,7 +16,15 @@ export function AccessNoteFields({ state }: { state: StopFormState }) {
   );
 }
 
-export function AssignmentFields({ state, current }: { state: StopFormState; current: Ref | null }) {
+export function AssignmentFields({
+  state,
+  current,
+  manager,
+}: {
+  state: StopFormState;
+  current: Ref | null;
+  manager: Ref | null;
+}) {
   const { form } = state;
   return (
     <FormSection title="Sharpener and status">
@@ -27,6 +36,16 @@ export function AssignmentFields({ state, current }: { state: StopFormState; cur
         value={form.values.assignedSharpenerId}
         onChange={(userId) => form.setFieldValue('assignedSharpenerId', userId)}
         error={form.errors.assignedSharpenerId}
+      />
+      <ManagerSelect
+        label="Shop manager"
+        description="A client account that sees every customer and shear of this stop."
+        placeholder="None"
+        current={manager}
+        maw={420}
+        value={form.values.managerUserId}
+        onChange={(userId) => form.setFieldValue('managerUserId', userId)}
+        error={form.errors.managerUserId}
       />
       <Switch
         size="md"
