@@ -13,7 +13,7 @@ import { ListFooter } from '../components/list-footer';
 import { ListEmpty, ListLoadFailed, ListLoading } from '../components/list-states';
 import { StopSelect } from '../components/stop-select';
 import { toCustomerQuery, useCustomerSearch } from '../hooks/use-customer-search';
-import { useSearchBox } from '../hooks/use-search-box';
+import { useSearchBox } from '@/hooks/use-search-box';
 import type { CustomerSort, SortOrder } from '../types';
 
 const SORT_CHOICES = [

@@ -7,7 +7,7 @@ import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
 import { ListFooter } from '@/features/customers/components/list-footer';
 import { ListEmpty, ListLoadFailed, ListLoading } from '@/features/customers/components/list-states';
-import { useSearchBox } from '@/features/customers/hooks/use-search-box';
+import { useSearchBox } from '@/hooks/use-search-box';
 import { useShears } from '../api/get-shears';
 import { ShearFilters } from '../components/shear-filters';
 import { ShearCards, ShearTable } from '../components/shear-table';

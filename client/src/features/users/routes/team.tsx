@@ -1,8 +1,8 @@
 import { Button, Group, Pagination, Select, Stack, Text, TextInput } from '@mantine/core';
-import { useDebouncedCallback, useDisclosure, useMediaQuery } from '@mantine/hooks';
+import { useDisclosure, useMediaQuery } from '@mantine/hooks';
 import { IconSearch, IconUserPlus } from '@tabler/icons-react';
-import { useEffect, useState } from 'react';
 import { PageHeader } from '@/components/page-header';
+import { useSearchBox } from '@/hooks/use-search-box';
 import { useSignedInUser } from '@/lib/session';
 import { useUsers } from '../api/get-users';
 import { InviteMemberModal } from '../components/invite-member-modal';
@@ -29,12 +29,8 @@ export function TeamRoute() {
   const showCards = useMediaQuery('(max-width: 62em)', false, { getInitialValueInEffect: false });
   const [inviteOpened, inviteModal] = useDisclosure(false);
 
-  const [search, setSearch] = useState(params.q);
-  const searchFor = useDebouncedCallback((q: string) => update({ q: q.trim(), page: 1 }), 300);
-  // Back and forward change the URL's search; the box follows it.
-  useEffect(() => {
-    setSearch((current) => (current.trim() === params.q ? current : params.q));
-  }, [params.q]);
+  // Follows back and forward, and ignores the URL echoing a search while more letters are being typed.
+  const search = useSearchBox(params.q, (q) => update({ q, page: 1 }));
 
   const total = list.data?.total ?? 0;
   const members = list.data?.items ?? [];
@@ -59,11 +55,8 @@ export function TeamRoute() {
           aria-label="Search the team"
           placeholder="Search by name or e-mail"
           leftSection={<IconSearch size={18} aria-hidden="true" />}
-          value={search}
-          onChange={(event) => {
-            setSearch(event.currentTarget.value);
-            searchFor(event.currentTarget.value);
-          }}
+          value={search.text}
+          onChange={(event) => search.change(event.currentTarget.value)}
           type="search"
           style={{ flex: '1 1 16rem' }}
         />
@@ -88,14 +81,7 @@ export function TeamRoute() {
       ) : list.isError ? (
         <TeamLoadFailed message={list.error.message} onRetry={() => void list.refetch()} />
       ) : members.length === 0 ? (
-        <TeamEmpty
-          search={params.q}
-          onClear={() => {
-            searchFor.cancel();
-            setSearch('');
-            update({ q: '', page: 1 });
-          }}
-        />
+        <TeamEmpty search={params.q} onClear={search.clear} />
       ) : showCards ? (
         <TeamCards members={members} actor={actor} />
       ) : (
