@@ -70,7 +70,7 @@ async function main(): Promise<void> {
       `  Database: ${cluster.url(devDatabase)}  (data in ${shown(cluster.dataDir)}; reset with npm run db:reset)`,
       '',
       '  Demo sign-ins, password keenroute-demo (demo data only: change these before real use):',
-      ...demoSignIns.map(([role, email]) => `    ${role.padEnd(10)} ${email}`),
+      ...demoSignIns.map(([role, email]) => `    ${role.padEnd(23)} ${email}`),
       '',
       'Press Ctrl-C to stop the API, the mail catcher, the geocoder stand-in and PostgreSQL.',
       '',
