@@ -83,8 +83,9 @@ describe('the registry in the browser', () => {
       .getByRole('searchbox', { name: 'Find by tag code, make or customer' })
       .fill(String(Number(tagCode.slice(3))));
     await page.getByRole('link', { name: `Go to ${tagCode}` }).click();
-    await page.getByText(customerName).first().waitFor();
-    expect(await page.getByText(tagCode).first().isVisible()).toBe(true);
+    await page.waitForURL(/\/shears\/[0-9a-f-]{36}$/);
+    await page.getByText(tagCode, { exact: true }).filter({ visible: true }).first().waitFor();
+    await page.getByRole('link', { name: customerName }).first().waitFor();
     // The shear page carries its edge recipe with the bench cautions.
     await page
       .getByText(/dust mask|dust extraction/i)
