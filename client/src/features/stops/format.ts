@@ -1,25 +1,9 @@
 import { STOP_KIND_LABELS, WEEKDAY_LABELS, type StopKind, type Weekday } from '@keenroute/shared';
-import { upperFirst } from '@/lib/format';
+import { formatDay, formatShortDay, upperFirst } from '@/lib/format';
+
+// The stop screens import their day formats from here with the rest of their wording.
+export { formatDay, formatShortDay };
 import type { StopSummary } from './types';
-
-const dayFormat = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
-const shortDayFormat = new Intl.DateTimeFormat('en', { day: 'numeric', month: 'short', timeZone: 'UTC' });
-
-function utcDate(isoDate: string): Date | null {
-  const match = /^(\d{4})-(\d{2})-(\d{2})$/.exec(isoDate);
-  return match ? new Date(Date.UTC(Number(match[1]), Number(match[2]) - 1, Number(match[3]))) : null;
-}
-
-// A "YYYY-MM-DD" is a calendar day: read in UTC so no time zone shifts it to the day before.
-export function formatDay(isoDate: string): string {
-  const date = utcDate(isoDate);
-  return date ? dayFormat.format(date) : isoDate;
-}
-
-export function formatShortDay(isoDate: string): string {
-  const date = utcDate(isoDate);
-  return date ? shortDayFormat.format(date) : isoDate;
-}
 
 /** Today as a calendar date on this device. */
 export function todayIso(now: Date = new Date()): string {

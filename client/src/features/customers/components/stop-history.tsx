@@ -1,6 +1,6 @@
 import { Card, Text, Timeline, Title } from '@mantine/core';
 import { IconMapPin } from '@tabler/icons-react';
-import { formatDay } from '../format-day';
+import { formatDay } from '@/lib/format';
 import type { CustomerDetail } from '../types';
 import { StopLink } from './stop-link';
 

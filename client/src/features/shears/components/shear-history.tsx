@@ -1,5 +1,5 @@
 import { Badge, Card, Text, Timeline, Title } from '@mantine/core';
-import { formatDay } from '@/features/customers/format-day';
+import { formatDay } from '@/lib/format';
 import { HISTORY_KIND_LABELS } from '../labels';
 import type { ShearHistoryEntry } from '../types';
 

@@ -4,7 +4,7 @@ import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { StopLink } from '@/features/customers/components/stop-link';
-import { formatDay } from '@/features/customers/format-day';
+import { formatDay } from '@/lib/format';
 import { upperFirst } from '@/lib/format';
 import { makeAndModel } from '../labels';
 import type { ShearDetail } from '../types';

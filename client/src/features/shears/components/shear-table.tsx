@@ -4,7 +4,7 @@ import { Link } from 'react-router-dom';
 import { SortableHeader } from '@/features/customers/components/sortable-header';
 import { StopLink } from '@/features/customers/components/stop-link';
 import { paths } from '@/config/paths';
-import { formatDay } from '@/features/customers/format-day';
+import { formatDay } from '@/lib/format';
 import { upperFirst } from '@/lib/format';
 import { makeAndModel } from '../labels';
 import type { ShearSort, ShearSummary, SortOrder } from '../types';

@@ -6,7 +6,7 @@ import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
 import { ListFooter } from '@/features/customers/components/list-footer';
 import { ListEmpty, ListLoadFailed, ListLoading } from '@/features/customers/components/list-states';
-import { formatDay } from '@/features/customers/format-day';
+import { formatDay } from '@/lib/format';
 import { positiveInt } from '@/features/customers/hooks/use-list-search';
 import { upperFirst } from '@/lib/format';
 import { useShears } from '../api/get-shears';
