@@ -1,0 +1,118 @@
+/**
+ * Route benchmark CLI: runs the app's solver on TSPLIB and Solomon instances and prints one JSON line.
+ *   route-bench.ts tsplib FILE.tsp [--time-limit-ms N] [--seed N]
+ *   route-bench.ts solomon FILE.txt [--time-limit-ms N] [--seed N]
+ * Lengths and distances are recomputed from the coordinates here, not taken on the solver's word; an infeasible
+ * answer exits 1. A Solomon line gains "unplanned" only when the solver left customers out.
+ */
+import { existsSync, readFileSync } from 'node:fs';
+import { basename, extname } from 'node:path';
+import { solve } from '../solver/solve';
+import { checkSolomonRoutes, parseSolomon } from './solomon';
+import {
+  solomonResultFromSolution,
+  solomonToSolverInput,
+  tsplibToSolverInput,
+  tsplibTourFromSolution,
+  type RunOptions,
+} from './to-solver-input';
+import { isPermutation, nearestNeighbourTour, parseTsplib, tourLength } from './tsplib';
+
+const USAGE = [
+  'usage: route-bench.ts tsplib FILE.tsp [--time-limit-ms N] [--seed N]',
+  '       route-bench.ts solomon FILE.txt [--time-limit-ms N] [--seed N]',
+].join('\n');
+
+const DEFAULTS: RunOptions = { timeLimitMs: 2000, seed: 1 };
+
+export class UsageError extends Error {}
+
+export interface BenchArgs extends RunOptions {
+  kind: 'tsplib' | 'solomon';
+  file: string;
+}
+
+export function parseArgs(argv: readonly string[]): BenchArgs {
+  const [kind, file, ...rest] = argv;
+  if (kind !== 'tsplib' && kind !== 'solomon') throw new UsageError(`unknown kind "${kind ?? ''}"`);
+  if (!file || file.startsWith('--')) throw new UsageError('missing FILE');
+  const options = { ...DEFAULTS };
+  for (let i = 0; i < rest.length; i += 2) {
+    const flag = rest[i];
+    const value = Number(rest[i + 1]);
+    if (rest[i + 1] === undefined || !Number.isInteger(value) || value < 0) {
+      throw new UsageError(`${flag} needs a non-negative integer`);
+    }
+    if (flag === '--time-limit-ms') options.timeLimitMs = value;
+    else if (flag === '--seed') options.seed = value;
+    else throw new UsageError(`unknown option "${flag}"`);
+  }
+  return { kind, file, ...options };
+}
+
+function timed<T>(run: () => T): { result: T; ms: number } {
+  const started = performance.now();
+  const result = run();
+  return { result, ms: Math.round(performance.now() - started) };
+}
+
+function runTsplib(args: BenchArgs): Record<string, unknown> {
+  const instance = parseTsplib(readFileSync(args.file, 'utf8'));
+  const input = tsplibToSolverInput(instance, args);
+  const { result, ms } = timed(() => solve(input));
+  const tour = tsplibTourFromSolution(instance, result);
+  if (!isPermutation(tour, instance.dimension)) throw new Error('solver tour does not visit every node exactly once');
+  return {
+    instance: instance.name,
+    nodes: instance.dimension,
+    length: tourLength(instance.coords, tour),
+    tour,
+    ms,
+    nearestNeighbour: tourLength(instance.coords, nearestNeighbourTour(instance.coords)),
+  };
+}
+
+function runSolomon(args: BenchArgs): Record<string, unknown> {
+  const instance = parseSolomon(readFileSync(args.file, 'utf8'), basename(args.file, extname(args.file)));
+  const input = solomonToSolverInput(instance, args);
+  const { result, ms } = timed(() => solve(input));
+  const outcome = solomonResultFromSolution(result);
+  const check = checkSolomonRoutes(instance, outcome.routes, outcome.unplanned);
+  if (check.problems.length > 0) throw new Error(`infeasible Solomon solution:\n  ${check.problems.join('\n  ')}`);
+  if (Math.abs(check.distance - outcome.distance) > 1e-6 * Math.max(1, check.distance)) {
+    process.stderr.write(`note: solver reports distance ${outcome.distance}, recomputed ${check.distance}\n`);
+  }
+  return {
+    instance: instance.name,
+    vehicles: outcome.vehicles,
+    distance: Math.round(check.distance * 100) / 100,
+    routes: outcome.routes,
+    ms,
+    // Only present when the solver could not fit everyone: such a run is not comparable with published results.
+    ...(outcome.unplanned.length > 0 ? { unplanned: outcome.unplanned } : {}),
+  };
+}
+
+function main(argv: readonly string[]): number {
+  let args: BenchArgs;
+  try {
+    args = parseArgs(argv);
+    if (!existsSync(args.file)) throw new UsageError(`no such file: ${args.file}`);
+  } catch (error) {
+    if (!(error instanceof UsageError)) throw error;
+    process.stderr.write(`${error.message}\n${USAGE}\n`);
+    return 2;
+  }
+  const line = args.kind === 'tsplib' ? runTsplib(args) : runSolomon(args);
+  process.stdout.write(`${JSON.stringify(line)}\n`);
+  return 0;
+}
+
+if (require.main === module) {
+  try {
+    process.exitCode = main(process.argv.slice(2));
+  } catch (error) {
+    process.stderr.write(`${error instanceof Error ? error.message : String(error)}\n`);
+    process.exitCode = 1;
+  }
+}
