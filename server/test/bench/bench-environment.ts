@@ -4,8 +4,7 @@ import { join } from 'node:path';
 
 // Imported first by the benchmarks: the app reads its environment when its modules load.
 if (!process.env.DATABASE_URL) {
-  console.error('Set DATABASE_URL to a scratch PostgreSQL database (the benchmark adds rows to it).');
-  process.exit(1);
+  throw new Error('Set DATABASE_URL to a scratch PostgreSQL database (the benchmark adds rows to it).');
 }
 // Request logs would flood the figures and cost time of their own.
 process.env.LOG_LEVEL ??= 'warn';
