@@ -5,7 +5,7 @@ import { useShears } from '@/features/shears/api/get-shears';
 import { ShearFormModal } from '@/features/shears/components/shear-form-modal';
 import { ShearCards, ShearTable } from '@/features/shears/components/shear-table';
 import type { CustomerDetail } from '../types';
-import { ListEmpty, ListLoadFailed, ListLoading } from './list-states';
+import { ListEmpty, ListLoadFailed, ListLoading } from '@/components/list-states';
 
 /** The customer's shears; an owner or office manager registers new ones from here. */
 export function CustomerShears({ customer, canManage }: { customer: CustomerDetail; canManage: boolean }) {

@@ -10,7 +10,7 @@ import { useCustomers } from '../api/get-customers';
 import { CustomerFormModal } from '../components/customer-form-modal';
 import { CustomerCards, CustomerTable } from '../components/customer-table';
 import { ListFooter } from '../components/list-footer';
-import { ListEmpty, ListLoadFailed, ListLoading } from '../components/list-states';
+import { ListEmpty, ListLoadFailed, ListLoading } from '@/components/list-states';
 import { StopSelect } from '../components/stop-select';
 import { toCustomerQuery, useCustomerSearch } from '../hooks/use-customer-search';
 import { useSearchBox } from '@/hooks/use-search-box';

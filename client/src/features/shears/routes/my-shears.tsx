@@ -5,7 +5,7 @@ import { Link, useSearchParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
 import { ListFooter } from '@/features/customers/components/list-footer';
-import { ListEmpty, ListLoadFailed, ListLoading } from '@/features/customers/components/list-states';
+import { ListEmpty, ListLoadFailed, ListLoading } from '@/components/list-states';
 import { formatDay } from '@/lib/format';
 import { positiveInt } from '@/features/customers/hooks/use-list-search';
 import { upperFirst } from '@/lib/format';

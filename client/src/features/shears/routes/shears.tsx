@@ -6,7 +6,7 @@ import { useNavigate } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
 import { ListFooter } from '@/features/customers/components/list-footer';
-import { ListEmpty, ListLoadFailed, ListLoading } from '@/features/customers/components/list-states';
+import { ListEmpty, ListLoadFailed, ListLoading } from '@/components/list-states';
 import { useSearchBox } from '@/hooks/use-search-box';
 import { useShears } from '../api/get-shears';
 import { ShearFilters } from '../components/shear-filters';
