@@ -17,8 +17,12 @@ import { DevModule } from './dev/dev.module';
 import { GeocodingModule } from './geocoding/geocoding.module';
 import { HealthModule } from './health/health.module';
 import { ImportsModule } from './imports/imports.module';
+import { JobsModule } from './jobs/jobs.module';
 import { MailModule } from './mail/mail.module';
 import { RatesModule } from './rates/rates.module';
+import { CalendarModule } from './route-days/calendar/calendar.module';
+import { VisitNoticesModule } from './route-days/notices/visit-notices.module';
+import { RouteDaysModule } from './route-days/route-days.module';
 import { ShearsModule } from './shears/shears.module';
 import { StopsModule } from './stops/stops.module';
 import { UsersModule } from './users/users.module';
@@ -88,6 +92,11 @@ const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
     ShearsModule,
     GeocodingModule,
     ImportsModule,
+    JobsModule,
+    VisitNoticesModule,
+    CalendarModule,
+    // Last: the notices and calendar routes under /route-days/ are literal paths that must match before :id.
+    RouteDaysModule,
   ],
   providers: [
     { provide: APP_GUARD, useClass: AccessGuard },

@@ -17,6 +17,7 @@ export const RULE_ERROR_CODES = [
   'invalid-ticket',
   'invalid-cadence',
   'invalid-hours',
+  'invalid-time',
 ] as const;
 export type RuleErrorCode = (typeof RULE_ERROR_CODES)[number];
 

@@ -9,3 +9,4 @@ export * from './bench-time.js';
 export * from './recipes/index.js';
 export * from './rates/index.js';
 export * from './registry/index.js';
+export * from './route-days/index.js';

@@ -1,7 +1,8 @@
 import { Global, Module } from '@nestjs/common';
 import { RegistryAccess } from './registry-access';
+import { RouteDayAccess } from './route-day-access';
 
-/** The ownership checks every registry module uses; global so stops, customers and shears share one. */
+/** The ownership checks every module uses; global so stops, customers, shears and route days share one. */
 @Global()
-@Module({ providers: [RegistryAccess], exports: [RegistryAccess] })
+@Module({ providers: [RegistryAccess, RouteDayAccess], exports: [RegistryAccess, RouteDayAccess] })
 export class AccessModule {}

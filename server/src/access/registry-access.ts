@@ -10,8 +10,7 @@ import { Stop } from '../stops/entities/stop.entity';
 /**
  * What each role may do with stops, customers and shears, in one place (PRODUCT.md's access rules):
  * - owner and office: everything;
- * - sharpener: reads the stops on their route (until route days exist: the stops assigned to them), the customers
- *   there and their shears; edits a stop's access notes; adds photos to shears they can read;
+ * - sharpener: reads the stops assigned to them or on their route days, the customers there and their shears; edits a stop's access notes; adds photos to shears they can read;
  * - client: reads their own customer record and shears; a shop manager reads every customer and shear of their stop.
  * Something a caller may not read answers 404, as if it did not exist, so ids never confirm another client's data.
  */
@@ -21,6 +20,10 @@ export type ShearAction = 'read' | 'edit' | 'add-photo';
 
 const ADMIN = new Set(['owner', 'office']);
 
+/** Stops on a sharpener's route days, any week: they need the stop's details to work it. */
+const ON_MY_ROUTE_DAYS =
+  'SELECT rds.stop_id FROM route_day_stops rds JOIN route_days rd ON rd.id = rds.route_day_id WHERE rd.sharpener_id = :scopeActor';
+
 @Injectable()
 export class RegistryAccess {
   constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
@@ -29,7 +32,9 @@ export class RegistryAccess {
   scopeStops<T extends ObjectLiteral>(query: SelectQueryBuilder<T>, actor: Actor, alias: string) {
     if (ADMIN.has(actor.role)) return query;
     if (actor.role === 'sharpener') {
-      return query.andWhere(`${alias}.assignedSharpenerId = :scopeActor`, { scopeActor: actor.id });
+      return query.andWhere(`(${alias}.assignedSharpenerId = :scopeActor OR ${alias}.id IN (${ON_MY_ROUTE_DAYS}))`, {
+        scopeActor: actor.id,
+      });
     }
     return query.andWhere('false');
   }
@@ -88,7 +93,7 @@ export class RegistryAccess {
   /** SQL for "a customer this non-admin actor may read", over the given user and stop columns. */
   private customerPredicate(actor: Actor, userColumn: string, stopColumn: string): string {
     if (actor.role === 'sharpener') {
-      return `${stopColumn} IN (SELECT s.id FROM stops s WHERE s.assigned_sharpener_id = :scopeActor)`;
+      return `(${stopColumn} IN (SELECT s.id FROM stops s WHERE s.assigned_sharpener_id = :scopeActor) OR ${stopColumn} IN (${ON_MY_ROUTE_DAYS}))`;
     }
     if (actor.role === 'client') {
       return `(${userColumn} = :scopeActor OR ${stopColumn} IN (SELECT s.id FROM stops s WHERE s.manager_user_id = :scopeActor))`;

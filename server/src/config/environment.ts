@@ -55,12 +55,28 @@ export class Environment {
   @IsUrl({ require_tld: false, require_protocol: true })
   GEOCODER_URL?: string;
 
+  /**
+   * A routing service's matrix endpoint of the usual `table` form (`GET {ROUTING_URL}/table/v1/driving/{lon,lat;...}
+   * ?annotations=duration,distance`). Unset: great-circle distance times the circuity setting at the average speed.
+   */
+  @IsOptional()
+  @IsUrl({ require_tld: false, require_protocol: true })
+  ROUTING_URL?: string;
+
   /** The business's IANA time zone: what "today" means for coming-due dates. */
   @IsString()
   BUSINESS_TIME_ZONE = 'America/Chicago';
 
   @IsIn(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'])
   LOG_LEVEL = 'info';
+
+  /** 'off' keeps this instance from working background jobs (it still queues them), e.g. for a web-only replica. */
+  @IsIn(['on', 'off'])
+  JOBS_WORKERS: 'on' | 'off' = 'on';
+
+  /** When visit notices due are queued (cron, in BUSINESS_TIME_ZONE); queueing twice sends nothing twice. */
+  @IsString()
+  VISIT_NOTICE_CRON = '0 * * * *';
 
   /** Sign-in attempts allowed per e-mail and address in one minute. */
   @Transform(({ value }) => Number(value))

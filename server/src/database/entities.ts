@@ -3,6 +3,12 @@ import { UserToken } from '../auth/entities/user-token.entity';
 import { CustomerStopHistory } from '../customers/entities/customer-stop-history.entity';
 import { Customer } from '../customers/entities/customer.entity';
 import { CsvImport } from '../imports/entities/csv-import.entity';
+import { CalendarFeed } from '../route-days/entities/calendar-feed.entity';
+import { PlanningSettings } from '../route-days/entities/planning-settings.entity';
+import { RouteDayStop } from '../route-days/entities/route-day-stop.entity';
+import { RouteDay } from '../route-days/entities/route-day.entity';
+import { RouteWeekPlan } from '../route-days/entities/route-week-plan.entity';
+import { VisitNotice } from '../route-days/entities/visit-notice.entity';
 import { RateCardVersion } from '../rates/entities/rate-card-version.entity';
 import { ShearHistoryEntry } from '../shears/entities/shear-history-entry.entity';
 import { ShearPhoto } from '../shears/entities/shear-photo.entity';
@@ -25,4 +31,10 @@ export const entities = [
   ShearPhoto,
   ShearHistoryEntry,
   CsvImport,
+  PlanningSettings,
+  RouteDay,
+  RouteDayStop,
+  RouteWeekPlan,
+  CalendarFeed,
+  VisitNotice,
 ];

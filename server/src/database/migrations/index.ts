@@ -2,6 +2,7 @@ import { CreateUsersAndTokens1764633600000 } from './1764633600000-CreateUsersAn
 import { CreateRateCards1764720000000 } from './1764720000000-CreateRateCards';
 import { CreateRegistry1764806400000 } from './1764806400000-CreateRegistry';
 import { CreateCsvImports1764806400001 } from './1764806400001-CreateCsvImports';
+import { CreateRouteDays1764892800000 } from './1764892800000-CreateRouteDays';
 
 /** Listed explicitly, oldest first, so the CLI, the app and jest load the same migrations without globs. */
 export const migrations = [
@@ -9,4 +10,5 @@ export const migrations = [
   CreateRateCards1764720000000,
   CreateRegistry1764806400000,
   CreateCsvImports1764806400001,
+  CreateRouteDays1764892800000,
 ];
