@@ -6,6 +6,7 @@ import {
   devEnvironment,
   devPorts,
   runMigrations,
+  planDemoWeeks,
   seedDemoData,
 } from './lib/app-setup.js';
 import { appOrigin } from './lib/environment.js';
@@ -59,6 +60,7 @@ async function main(): Promise<void> {
   teardown.add('stop the API', () => api.stop(10_000));
   const origin = appOrigin(appPort);
   await waitForHttp(`${origin}/api/health`, api, 90_000);
+  await planDemoWeeks(origin);
 
   console.log(
     [

@@ -11,6 +11,7 @@ import { SuiteReport } from './lib/suite-report.js';
 import { runScript, type Workspace } from './lib/workspace.js';
 import { startGeocoder, type Geocoder } from './stand-ins/geocoder.js';
 import { startMailCatcher, type MailCatcher } from './stand-ins/mail-catcher.js';
+import { startRouting, type Routing } from './stand-ins/routing.js';
 
 const suiteTimeoutMs = 15 * 60_000;
 const buildTimeoutMs = 5 * 60_000;
@@ -51,7 +52,12 @@ async function main(): Promise<void> {
     runCommand(
       'scripts',
       path.join(repoRoot, 'node_modules', '.bin', 'tsx'),
-      ['--test', 'scripts/stand-ins/mail-catcher.test.ts', 'scripts/stand-ins/geocoder.test.ts'],
+      [
+        '--test',
+        'scripts/stand-ins/mail-catcher.test.ts',
+        'scripts/stand-ins/geocoder.test.ts',
+        'scripts/stand-ins/routing.test.ts',
+      ],
       {
         cwd: repoRoot,
         env: unitEnv,
@@ -74,6 +80,7 @@ async function main(): Promise<void> {
   let cluster: Cluster | undefined;
   let catcher: MailCatcher | undefined;
   let geocoder: Geocoder | undefined;
+  let routing: Routing | undefined;
   await report.step('setup', 'test PostgreSQL + keenroute_test', async () => {
     cluster = await startTestCluster();
     await ensureDatabase(cluster, 'keenroute_test');
@@ -88,6 +95,11 @@ async function main(): Promise<void> {
     teardown.add('stop the geocoder stand-in', () => geocoder?.stop());
     console.log(`Geocoder stand-in: ${geocoder.url}`);
   });
+  await report.step('setup', 'routing stand-in', async () => {
+    routing = await startRouting({ port: 0, host: '127.0.0.1' });
+    teardown.add('stop the routing stand-in', () => routing?.stop());
+    console.log(`Routing stand-in: ${routing.url}`);
+  });
 
   const jwtSecret = throwawayJwtSecret();
   rmSync(paths.testApp, { recursive: true, force: true });
@@ -100,11 +112,12 @@ async function main(): Promise<void> {
       smtpPort: catcher!.smtpPort,
       mailCatcherUrl: catcher!.url,
       geocoderUrl: geocoder!.url,
+      routingUrl: routing!.url,
       dataDir: paths.testApp,
     });
 
   await report.step('suite', 'server unit (jest)', script('server', 'test', unitEnv));
-  if (cluster && catcher && geocoder) {
+  if (cluster && catcher && geocoder && routing) {
     await report.step(
       'suite',
       'server e2e (jest + supertest)',
@@ -125,7 +138,7 @@ async function main(): Promise<void> {
     'build client',
     script('client', 'build', process.env, buildTimeoutMs),
   );
-  if (!(sharedBuilt && serverBuilt && clientBuilt && cluster && catcher && geocoder)) {
+  if (!(sharedBuilt && serverBuilt && clientBuilt && cluster && catcher && geocoder && routing)) {
     report.blocked('browser (playwright-core + Chromium)', 'a build, the test PostgreSQL or a stand-in failed');
     return;
   }

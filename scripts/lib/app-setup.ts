@@ -1,5 +1,6 @@
 import path from 'node:path';
 import { paths } from './paths.js';
+import { SetupError } from './setup-error.js';
 import type { ClusterOptions } from './postgres.js';
 import { mustRunScript, type Workspace } from './workspace.js';
 import { appEnvironment, portFromEnv } from './environment.js';
@@ -71,4 +72,41 @@ export async function seedDemoData(env: NodeJS.ProcessEnv): Promise<void> {
     env,
     silent: true,
   });
+}
+
+/**
+ * The demo's route days: signs in as the demo owner and plans this week and next when neither has any route day, so
+ * the sharpener's Today and My week pages have something to show. Through the API, as a planner would.
+ */
+export async function planDemoWeeks(origin: string): Promise<void> {
+  const login = await fetch(`${origin}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: 'owner@demo.keenroute.test', password: 'keenroute-demo' }),
+  });
+  if (!login.ok) return console.log('The demo owner could not sign in (password changed?): no demo weeks planned.');
+  const { accessToken } = (await login.json()) as { accessToken: string };
+  const headers = { authorization: `Bearer ${accessToken}`, 'content-type': 'application/json' };
+  const thisWeek = (await (await fetch(`${origin}/api/route-days`, { headers })).json()) as {
+    today: string;
+    days: unknown[];
+  };
+  const next = new Date(`${thisWeek.today}T12:00:00Z`);
+  next.setUTCDate(next.getUTCDate() + 7);
+  const nextWeek = next.toISOString().slice(0, 10);
+  const nextDays = (await (await fetch(`${origin}/api/route-days?week=${nextWeek}`, { headers })).json()) as {
+    days: unknown[];
+  };
+  if (thisWeek.days.length > 0 || nextDays.days.length > 0) return;
+  console.log('Planning the demo route days for this week and next…');
+  for (const week of [thisWeek.today, nextWeek]) {
+    const planned = await fetch(`${origin}/api/route-days/plan`, {
+      method: 'POST',
+      headers,
+      body: JSON.stringify({ week }),
+    });
+    // A week with no work day left (a weekend start) is refused with a clear message: nothing to plan, not a failure.
+    if (!planned.ok && planned.status !== 400)
+      throw new SetupError(`Planning the demo week of ${week} failed (HTTP ${planned.status}).`);
+  }
 }

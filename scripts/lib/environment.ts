@@ -11,6 +11,8 @@ export interface AppSettings {
   mailCatcherUrl: string;
   /** The geocoder stand-in (or a real geocoder of the same search form). */
   geocoderUrl: string;
+  /** A routing service of the `table` form; unset: great-circle estimates. */
+  routingUrl?: string;
   dataDir: string;
 }
 
@@ -30,6 +32,7 @@ export function appEnvironment(settings: AppSettings): NodeJS.ProcessEnv {
     MAIL_FROM: 'Keenroute (demo) <no-reply@demo.keenroute.test>',
     MAIL_CATCHER_URL: settings.mailCatcherUrl,
     GEOCODER_URL: settings.geocoderUrl,
+    ...(settings.routingUrl ? { ROUTING_URL: settings.routingUrl } : {}),
     CLIENT_DIST: paths.clientDist,
     DATA_DIR: settings.dataDir,
     // Tests refuse requests on purpose by the hundred; only real failures (5xx) belong in their output.

@@ -168,6 +168,29 @@ describe('route days (e2e)', () => {
       }
     });
 
+    it('takes drive figures from the routing service when one is set, else from the great-circle estimate', () => {
+      const day = mine(week).find((d) => d.stops.length > 0)!;
+      const first = day.stops[0]!;
+      const [a, b] = [day.start, first];
+      const rad = Math.PI / 180;
+      let expected: number;
+      if (process.env.ROUTING_URL) {
+        // The routing stand-in drives the grid: north-south plus east-west km (111.32 km per degree, from memory).
+        const north = Math.abs(a.latitude - b.latitude) * 111.32;
+        const east = Math.abs(a.longitude - b.longitude) * 111.32 * Math.cos(((a.latitude + b.latitude) / 2) * rad);
+        expected = north + east;
+      } else {
+        // Haversine formula, mean Earth radius 6371.0088 km (IUGG), times the circuity setting.
+        const h =
+          Math.sin(((b.latitude - a.latitude) * rad) / 2) ** 2 +
+          Math.cos(a.latitude * rad) *
+            Math.cos(b.latitude * rad) *
+            Math.sin(((b.longitude - a.longitude) * rad) / 2) ** 2;
+        expected = 2 * 6371.0088 * Math.asin(Math.sqrt(h)) * settings.circuity;
+      }
+      expect(first.kmBefore).toBeCloseTo(expected, 1);
+    });
+
     it('is refused to a sharpener and a client', async () => {
       await http().post('/api/route-days/plan').set(bearer('sharpener')).send({ week: nextWeek }).expect(403);
       await http().post('/api/route-days/plan').set(bearer('client')).send({ week: nextWeek }).expect(403);

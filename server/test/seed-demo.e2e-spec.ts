@@ -39,7 +39,7 @@ describe('demo seed (e2e)', () => {
       (SELECT count(*) FROM stops) AS stops, (SELECT count(*) FROM stop_visits) AS visits,
       (SELECT count(*) FROM customers) AS customers, (SELECT count(*) FROM customer_stop_history) AS history,
       (SELECT count(*) FROM shears) AS shears, (SELECT count(*) FROM shear_history) AS shear_history,
-      (SELECT last_value FROM shear_tag_serial) AS tag_serial`);
+      (SELECT last_value FROM shear_tag_serial) AS tag_serial, (SELECT count(*) FROM planning_settings) AS planning`);
   const userId = async (email: string) =>
     (await one<{ id: string }>(`SELECT id FROM users WHERE email = $1`, [email])).id;
 

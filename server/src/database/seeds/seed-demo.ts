@@ -1,10 +1,14 @@
-/** The demo seed: invented users, a demo rate card and an invented registry for the demo scenario (Larkhaven). */
+/**
+ * The demo seed: invented users, a demo rate card, planning settings and an invented registry for the demo scenario
+ * (Larkhaven).
+ */
 import { DEMO_RATE_CARD } from '@keenroute/shared';
 import { hash } from 'bcryptjs';
 import { type DataSource, In } from 'typeorm';
 import { BCRYPT_COST } from '../../auth/jwt.constants';
 import { RateCardVersion } from '../../rates/entities/rate-card-version.entity';
 import { User } from '../../users/entities/user.entity';
+import { seedDemoPlanning } from './demo-planning';
 import { DEMO_PASSWORD, DEMO_USERS } from './demo-users';
 import { registryIsEmpty, seedDemoRegistry } from './seed-registry';
 
@@ -38,6 +42,7 @@ export async function seedDemo(dataSource: DataSource, options: SeedDemoOptions 
       await manager.getRepository(RateCardVersion).insert({ card: DEMO_RATE_CARD, createdBy: null });
       changed = true;
     }
+    if (await seedDemoPlanning(manager)) changed = true;
     if (await registryIsEmpty(manager)) {
       await seedDemoRegistry(manager, today);
       changed = true;

@@ -173,7 +173,7 @@ export class WeekPlanner {
   /**
    * Stops to plan: active, due by the week's end, assigned to one of these sharpeners (or to nobody, when planning
    * everyone), and not on
-   * another sharpener's day that week nor on a day already past; plus every stop locked to one of these sharpeners'
+   * another sharpener's day that week nor on a day already past, nor already on a day of another week still to come; plus every stop locked to one of these sharpeners'
    * days still to come.
    */
   private candidates(weekStart: string, weekEnd: string, sharpenerIds: string[], today: string, unassigned: boolean) {
@@ -191,6 +191,8 @@ export class WeekPlanner {
         WHERE s.active
           AND NOT EXISTS (SELECT 1 FROM week_stops o
                            WHERE o.stop_id = s.id AND (NOT o.sharpener_id = ANY($3) OR o.day < $4))
+          AND NOT EXISTS (SELECT 1 FROM route_day_stops x JOIN route_days xd ON xd.id = x.route_day_id
+                           WHERE x.stop_id = s.id AND xd.day >= $4::date AND xd.day NOT BETWEEN $1 AND $2)
           AND (w.locked OR (
                 ((s.assigned_sharpener_id IS NULL AND $5) OR s.assigned_sharpener_id = ANY($3))
                 AND COALESCE((SELECT max(v.worked_on) FROM stop_visits v WHERE v.stop_id = s.id) + s.cadence_weeks * 7,
