@@ -1,9 +1,19 @@
 import type { INestApplication } from '@nestjs/common';
-import { addDays, minutesOfDay, weekStart, weekdayOf, type OpeningHours, type Role } from '@keenroute/shared';
+import {
+  addDays,
+  benchMinutes,
+  minutesOfDay,
+  weekStart,
+  weekdayOf,
+  type OpeningHours,
+  type Role,
+} from '@keenroute/shared';
 import { randomUUID } from 'node:crypto';
 import { PDFParse } from 'pdf-parse';
 import request from 'supertest';
 import type { App } from 'supertest/types';
+import { DataSource } from 'typeorm';
+import { ExpectedBenchService } from '../src/route-days/planning/expected-bench';
 import type { RouteDayDto, WeekDto } from '../src/route-days/dto/route-day-response.dto';
 import { RouteDaysService } from '../src/route-days/route-days.service';
 import { createTestApp, createUser, signIn } from './utils/test-app';
@@ -305,6 +315,47 @@ describe('route days (e2e)', () => {
         .body as WeekDto;
       expect(after.unplanned.find((u) => u.stopId === off)?.reason).toBe('taken-off');
       expect(mine(after).some((d) => d.stops.some((s) => s.stopId === off))).toBe(false);
+    });
+  });
+
+  describe('expected bench minutes', () => {
+    it("count the stop's shears by the rules package, scaled to the pairs serviced at its recent visits", async () => {
+      const stopId = await createStop({ openingHours: OPEN_WEEKDAYS });
+      const customerId = (
+        await http()
+          .post('/api/customers')
+          .set(bearer('office'))
+          .send({ name: 'Bench e2e groomer', stopId })
+          .expect(201)
+      ).body.id as string;
+      const shears: { id: string }[] = [];
+      for (const edgeType of ['beveled', 'beveled', 'convex', 'convex']) {
+        const shear = await http()
+          .post('/api/shears')
+          .set(bearer('office'))
+          .send({ customerId, lengthIn: 6, edgeType, toolKind: 'straight' })
+          .expect(201);
+        shears.push(shear.body as { id: string });
+      }
+      const bench = app.get(ExpectedBenchService);
+      // Rules package bench time (common practice): setup 10, beveled 10 and convex 18 per pair: 66 minutes.
+      const all = benchMinutes([
+        { edgeType: 'beveled', toolKind: 'straight', count: 2 },
+        { edgeType: 'convex', toolKind: 'straight', count: 2 },
+      ]);
+      expect(all).toBe(10 + 2 * 10 + 2 * 18);
+      expect((await bench.forStops([stopId])).get(stopId)).toEqual({ pairs: 4, minutes: all });
+      // Two of the four serviced at the one visit worked: half the pair minutes are expected next time.
+      const day = addDays(app.get(RouteDaysService).today(), -14);
+      await http().post(`/api/stops/${stopId}/visits`).set(bearer('office')).send({ workedOn: day }).expect(201);
+      const db = app.get(DataSource);
+      for (const shear of shears.slice(0, 2)) {
+        await db.query(
+          `INSERT INTO shear_history (shear_id, happened_on, kind, summary) VALUES ($1, $2, 'serviced', 'e2e')`,
+          [shear.id, day],
+        );
+      }
+      expect((await bench.forStops([stopId])).get(stopId)).toEqual({ pairs: 2, minutes: 10 + (all - 10) / 2 });
     });
   });
 
