@@ -144,7 +144,9 @@ describe('calendar feed (e2e)', () => {
   });
 
   it('serves the feed without sign-in as text/calendar, privately cached for five minutes', async () => {
-    const response = await http().get(path(await feedUrl('sharpener'))).expect(200);
+    const response = await http()
+      .get(path(await feedUrl('sharpener')))
+      .expect(200);
     expect(response.headers['content-type']).toMatch(/^text\/calendar; charset=utf-8/);
     expect(response.headers['cache-control']).toBe('private, max-age=300');
     expect(response.text).toMatch(/^BEGIN:VCALENDAR\r\nVERSION:2\.0\r\n/);
@@ -154,7 +156,13 @@ describe('calendar feed (e2e)', () => {
   });
 
   it("has an event per stop at the planned minutes in the business's zone, with summary, location and UID", async () => {
-    const events = eventsOf((await http().get(path(await feedUrl('sharpener'))).expect(200)).text);
+    const events = eventsOf(
+      (
+        await http()
+          .get(path(await feedUrl('sharpener')))
+          .expect(200)
+      ).text,
+    );
     const [past, soon] = mine;
     const expected = [past!, soon!].flatMap(({ routeDay, stops }) => stops.map((s) => ({ routeDay, ...s })));
     for (const { routeDay, stop, row } of expected) {
@@ -179,8 +187,14 @@ describe('calendar feed (e2e)', () => {
     expect(events).toHaveLength(5);
   });
 
-  it("shows another sharpener only their own days", async () => {
-    const events = eventsOf((await http().get(path(await feedUrl('other'))).expect(200)).text);
+  it('shows another sharpener only their own days', async () => {
+    const events = eventsOf(
+      (
+        await http()
+          .get(path(await feedUrl('other')))
+          .expect(200)
+      ).text,
+    );
     expect(events.map((e) => e.uid).sort()).toEqual(
       [`${theirs.routeDay.id}@keenroute`, `${theirs.routeDay.id}.${theirs.stops[0]!.stop.id}@keenroute`].sort(),
     );
@@ -188,8 +202,8 @@ describe('calendar feed (e2e)', () => {
 
   it('renews the address: the old one answers 404, the new one works', async () => {
     const old = await feedUrl('sharpener');
-    const renewed = (await http().post('/api/route-days/calendar-feed/renew').set(bearer('sharpener')).expect(200))
-      .body.url as string;
+    const renewed = (await http().post('/api/route-days/calendar-feed/renew').set(bearer('sharpener')).expect(200)).body
+      .url as string;
     expect(renewed).not.toBe(old);
     expect(await feedUrl('sharpener')).toBe(renewed);
     await http().get(path(old)).expect(404);
@@ -197,7 +211,9 @@ describe('calendar feed (e2e)', () => {
   });
 
   it('answers 404 for a token nobody holds or a malformed one', async () => {
-    await http().get(`/api/calendar/${'A'.repeat(43)}.ics`).expect(404);
+    await http()
+      .get(`/api/calendar/${'A'.repeat(43)}.ics`)
+      .expect(404);
     await http().get('/api/calendar/short.ics').expect(404);
   });
 });
