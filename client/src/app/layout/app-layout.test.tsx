@@ -10,11 +10,11 @@ import { RequireAuth } from '@/features/auth/components/require-auth';
 import { AppLayout } from './app-layout';
 
 // PRODUCT.md's plan, limited to the pages that exist now.
-const REGISTRY = ['Home', 'Coming due', 'Stops', 'Customers', 'Shears'];
+const REGISTRY = ['Coming due', 'Stops', 'Customers', 'Shears'];
 const EXPECTED_NAV: Record<Role, string[]> = {
-  owner: [...REGISTRY, 'Import', 'Edge recipes', 'Team', 'Rates', 'Outbox'],
-  office: [...REGISTRY, 'Import', 'Edge recipes', 'Team', 'Rates'],
-  sharpener: [...REGISTRY, 'Edge recipes'],
+  owner: ['Home', 'Week plan', 'Tickets', ...REGISTRY, 'Import', 'Edge recipes', 'Team', 'Rates', 'Outbox'],
+  office: ['Home', 'Week plan', 'Tickets', ...REGISTRY, 'Import', 'Edge recipes', 'Team', 'Rates'],
+  sharpener: ['Home', 'Today', 'My week', 'Tickets', ...REGISTRY, 'Edge recipes'],
   client: ['Home', 'My shears'],
 };
 
