@@ -34,7 +34,7 @@ export function WeekBoard({ week }: { week: Week }) {
       <Box
         style={{
           display: 'grid',
-          gridTemplateColumns: `${rows.length > 1 ? '8rem ' : ''}repeat(${dates.length}, minmax(16rem, 1fr))`,
+          gridTemplateColumns: `${rows.length > 1 ? '7rem ' : ''}repeat(${dates.length}, minmax(13rem, 1fr))`,
           gap: 'var(--mantine-spacing-xs)',
           alignItems: 'start',
         }}
