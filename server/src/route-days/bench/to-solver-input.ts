@@ -16,6 +16,8 @@ export const SOLOMON_FLEET = 25;
 export interface RunOptions {
   timeLimitMs: number;
   seed: number;
+  /** Hard wall-clock cap passed to the solver (its default when absent). */
+  maxWallMs?: number;
 }
 
 /** One vehicle from node 1 back to node 1; every other node a stop with id = its TSPLIB node id. */
@@ -31,6 +33,7 @@ export function tsplibToSolverInput(instance: TsplibInstance, options: RunOption
     })),
     matrix: euclideanMatrix(instance.coords, { round: 'nint' }),
     timeLimitMs: options.timeLimitMs,
+    ...(options.maxWallMs !== undefined ? { maxWallMs: options.maxWallMs } : {}),
     seed: options.seed,
     objective: 'distance',
   };
@@ -79,6 +82,7 @@ export function solomonToSolverInput(
     })),
     matrix: euclideanMatrix(instance.nodes, { round: 'none' }),
     timeLimitMs: options.timeLimitMs,
+    ...(options.maxWallMs !== undefined ? { maxWallMs: options.maxWallMs } : {}),
     seed: options.seed,
     objective: 'vehicles-then-distance',
   };

@@ -45,6 +45,13 @@ export function checkSolution(input: SolverInput, solution: Solution): string[] 
   return errors;
 }
 
+/** The windows the stop offers this vehicle: its per-vehicle list when it has one (none if the vehicle is left out). */
+function windowsOn(stop: SolverStop, vehicleId: string): readonly { open: number; close: number }[] {
+  if (stop.vehicleWindows === undefined) return stop.windows;
+  const entry = Object.entries(stop.vehicleWindows).find(([id]) => id === vehicleId);
+  return entry ? entry[1] : [];
+}
+
 function near(a: number, b: number): boolean {
   return Math.abs(a - b) <= EPS * Math.max(1, Math.abs(a), Math.abs(b));
 }
@@ -84,8 +91,10 @@ function checkRoute(input: SolverInput, route: PlannedRoute, stops: Map<string, 
     drive += m.minutes(place, stop.place);
     if (!near(visit.arrival, arrival)) errors.push(`${stop.id}: arrival ${visit.arrival}, recomputed ${arrival}`);
     if (visit.start < arrival - EPS) errors.push(`${stop.id}: starts before arriving`);
-    if (!stop.windows.some((w) => visit.start >= w.open - EPS && visit.start <= w.close + EPS)) {
-      errors.push(`${stop.id}: start ${visit.start} outside every window`);
+    const windows = windowsOn(stop, vehicle.id);
+    if (windows.length === 0) errors.push(`${stop.id}: no window on ${vehicle.id}'s day`);
+    else if (!windows.some((w) => visit.start >= w.open - EPS && visit.start <= w.close + EPS)) {
+      errors.push(`${stop.id}: start ${visit.start} outside every window on ${vehicle.id}'s day`);
     }
     if (!near(visit.leave, visit.start + stop.serviceMinutes)) errors.push(`${stop.id}: leave is not start + service`);
     service += stop.serviceMinutes;

@@ -60,3 +60,40 @@ export function euclideanMatrix(points: { x: number; y: number }[], options: { r
   }
   return new DenseMatrix(n, dist, dist);
 }
+
+/** Plain travel tables, row-major by place: what crosses a worker-thread boundary (structured-clone friendly). */
+export interface MatrixArrays {
+  minutes: number[][];
+  distance: number[][];
+}
+
+/** Builds a TravelMatrix from plain arrays (e.g. received in a worker thread); refuses ragged or non-finite tables. */
+export function matrixFromArrays(arrays: MatrixArrays): TravelMatrix {
+  const n = arrays.minutes.length;
+  if (arrays.distance.length !== n)
+    throw new Error(`matrix: ${n} minute rows but ${arrays.distance.length} distance rows`);
+  const dist = new Float64Array(n * n);
+  const mins = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) {
+    const mRow = arrays.minutes[i]!;
+    const dRow = arrays.distance[i]!;
+    if (mRow.length !== n || dRow.length !== n) throw new Error(`matrix: row ${i} is not ${n} long`);
+    for (let j = 0; j < n; j++) {
+      const m = mRow[j]!;
+      const d = dRow[j]!;
+      if (!Number.isFinite(m) || !Number.isFinite(d) || m < 0 || d < 0) {
+        throw new Error(`matrix: entry ${i},${j} must be a finite non-negative number`);
+      }
+      mins[i * n + j] = m;
+      dist[i * n + j] = d;
+    }
+  }
+  return new DenseMatrix(n, dist, mins);
+}
+
+/** The plain arrays of any TravelMatrix, to send it to a worker thread. */
+export function matrixToArrays(matrix: TravelMatrix): MatrixArrays {
+  const rows = (f: (i: number, j: number) => number): number[][] =>
+    Array.from({ length: matrix.size }, (_, i) => Array.from({ length: matrix.size }, (_, j) => f(i, j)));
+  return { minutes: rows((i, j) => matrix.minutes(i, j)), distance: rows((i, j) => matrix.distance(i, j)) };
+}

@@ -39,6 +39,11 @@ export interface SolverStop {
   place: number;
   /** Service may start inside any one of these (opening hours, or a booked window); sorted, not overlapping. */
   windows: TimeWindow[];
+  /**
+   * When present: the windows on each vehicle's day (a week plan has one vehicle per sharpener and day, and opening
+   * hours differ by weekday). A vehicle left out, or given no windows, cannot take the stop. Overrides `windows`.
+   */
+  vehicleWindows?: Readonly<Record<string, TimeWindow[]>>;
   serviceMinutes: number;
   /** Higher goes first when not everything fits (overdue stops). */
   priority: number;
@@ -51,8 +56,10 @@ export interface SolverInput {
   vehicles: Vehicle[];
   stops: SolverStop[];
   matrix: TravelMatrix;
-  /** Wall-clock budget for local search. */
+  /** Budget for local search, counted in work steps calibrated to about this many ms (same answer on any machine). */
   timeLimitMs: number;
+  /** Hard wall-clock cap; past it the best answer so far is returned (and runs may differ). Default 3x the limit. */
+  maxWallMs?: number;
   /** Same seed and input, same answer. */
   seed: number;
   /**
