@@ -16,9 +16,9 @@ function daysOf(page: Page, sharpener: string): Locator {
   return page.locator(`section[aria-label*=" with ${sharpener}"]`);
 }
 
-/** The stop rows of a day card. */
+/** The stop rows of a day card (an empty day's list holds only a "No stops yet" line). */
 function stopsIn(day: Locator): Locator {
-  return day.locator('ol > li');
+  return day.locator('ol > li[aria-label]');
 }
 
 /** Drags with the mouse the way a person does: press on the handle, move in steps, let go over the target. */
@@ -95,8 +95,13 @@ describe('route days in the browser', () => {
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'My week' }).click();
     await page.getByRole('heading', { name: 'My week' }).waitFor();
     await page.getByRole('button', { name: 'Next week' }).click();
-    const sheetLink = page.getByRole('link', { name: /^Day sheet for / }).first();
-    await sheetLink.click();
+    const dayWithStops = page
+      .locator('section[aria-label*=" with "]')
+      .filter({ has: page.getByRole('button', { name: /^Drag / }) })
+      .first();
+    const firstStop = ((await stopsIn(dayWithStops).first().getAttribute('aria-label')) ?? '').replace(/^\d+\. /, '');
+    await dayWithStops.getByRole('link', { name: /^Day sheet for / }).click();
+    await page.getByText(firstStop).first().waitFor();
     await page.getByRole('button', { name: /Print|PDF/ }).waitFor();
     expect(await overflowsHorizontally(page)).toBe(false);
     await screenshot(page, 'day-sheet-phone');

@@ -85,6 +85,8 @@ export class WeekPlanner {
       stops: placed.map((p) => p.stop),
       matrix,
       timeLimitMs: settings.solveSeconds * 1000,
+      // The planner waits for this: the setting is a promise about the wall clock, not only the solver's step budget.
+      maxWallMs: settings.solveSeconds * 1000,
       seed: 1,
       objective: 'time',
     });
