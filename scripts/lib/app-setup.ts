@@ -109,4 +109,6 @@ export async function planDemoWeeks(origin: string): Promise<void> {
     if (!planned.ok && planned.status !== 400)
       throw new SetupError(`Planning the demo week of ${week} failed (HTTP ${planned.status}).`);
   }
+  // Visit notices for the days coming up go out now rather than at the next hourly run; read them in the Outbox.
+  await fetch(`${origin}/api/route-days/notices/run`, { method: 'POST', headers, body: '{}' });
 }
