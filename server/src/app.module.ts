@@ -8,6 +8,7 @@ import { randomUUID } from 'node:crypto';
 import { LoggerModule } from 'nestjs-pino';
 import { AccessModule } from './access/access.module';
 import { AuthModule } from './auth/auth.module';
+import { BookingsModule } from './bookings/bookings.module';
 import { AccessGuard } from './auth/guards/access.guard';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
 import { validateEnvironment, type AppConfig } from './config/environment';
@@ -25,6 +26,7 @@ import { VisitNoticesModule } from './route-days/notices/visit-notices.module';
 import { RouteDaysModule } from './route-days/route-days.module';
 import { ShearsModule } from './shears/shears.module';
 import { StopsModule } from './stops/stops.module';
+import { TicketsModule } from './tickets/tickets.module';
 import { UsersModule } from './users/users.module';
 
 const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
@@ -95,6 +97,8 @@ const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
     JobsModule,
     VisitNoticesModule,
     CalendarModule,
+    BookingsModule,
+    TicketsModule,
     // Last: the notices and calendar routes under /route-days/ are literal paths that must match before :id.
     RouteDaysModule,
   ],

@@ -111,6 +111,7 @@ describe('shears (e2e)', () => {
         stop: { id: ids.stopA, name: `Harbor Salon ${tag}` },
         photoCount: 0,
         lastServicedOn: null,
+        sharpeningCount: 0,
         notes: '',
         photos: [],
         history: [

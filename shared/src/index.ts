@@ -10,3 +10,4 @@ export * from './recipes/index.js';
 export * from './rates/index.js';
 export * from './registry/index.js';
 export * from './route-days/index.js';
+export * from './bookings/index.js';

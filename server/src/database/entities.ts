@@ -1,5 +1,7 @@
 import { RefreshToken } from '../auth/entities/refresh-token.entity';
 import { UserToken } from '../auth/entities/user-token.entity';
+import { BookingItem } from '../bookings/entities/booking-item.entity';
+import { Booking } from '../bookings/entities/booking.entity';
 import { CustomerStopHistory } from '../customers/entities/customer-stop-history.entity';
 import { Customer } from '../customers/entities/customer.entity';
 import { CsvImport } from '../imports/entities/csv-import.entity';
@@ -15,6 +17,10 @@ import { ShearPhoto } from '../shears/entities/shear-photo.entity';
 import { Shear } from '../shears/entities/shear.entity';
 import { StopVisit } from '../stops/entities/stop-visit.entity';
 import { Stop } from '../stops/entities/stop.entity';
+import { TicketLineOverride } from '../tickets/entities/ticket-line-override.entity';
+import { TicketLine } from '../tickets/entities/ticket-line.entity';
+import { Ticket } from '../tickets/entities/ticket.entity';
+import { Payment } from '../tickets/payments/payment.entity';
 import { User } from '../users/entities/user.entity';
 
 /** Every entity, for the CLI data source; the app registers them through each module's forFeature. */
@@ -37,4 +43,10 @@ export const entities = [
   RouteWeekPlan,
   CalendarFeed,
   VisitNotice,
+  Booking,
+  BookingItem,
+  Ticket,
+  TicketLine,
+  TicketLineOverride,
+  Payment,
 ];

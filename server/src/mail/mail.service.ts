@@ -1,10 +1,12 @@
 import { Injectable, Logger } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { createTransport, type Transporter } from 'nodemailer';
+import type { Address } from 'nodemailer/lib/mailer';
 import type { AppConfig } from '../config/environment';
 
 export interface OutgoingMail {
-  to: string;
+  /** An address object keeps a person's name out of the header text nodemailer writes. */
+  to: string | Address;
   subject: string;
   text: string;
   html?: string;

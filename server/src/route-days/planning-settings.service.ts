@@ -50,5 +50,7 @@ export function toDto(row: PlanningSettings): PlanningSettingsDto {
     averageSpeedKmh: row.averageSpeedKmh,
     noticeDays: row.noticeDays,
     solveSeconds: row.solveSeconds,
+    bookingCutoffDaysBefore: row.bookingCutoffDaysBefore,
+    bookingCutoffHour: row.bookingCutoffHour,
   };
 }

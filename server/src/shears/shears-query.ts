@@ -13,6 +13,9 @@ const PHOTO_COUNT = '(SELECT COUNT(*)::int FROM shear_photos counted WHERE count
 const LAST_SERVICED = `(SELECT to_char(MAX(serviced.happened_on), 'YYYY-MM-DD') FROM shear_history serviced
   WHERE serviced.shear_id = shear.id AND serviced.kind = 'serviced')`;
 
+const SHARPENING_COUNT = `(SELECT COUNT(*)::int FROM shear_history sharpened
+  WHERE sharpened.shear_id = shear.id AND sharpened.kind = 'serviced')`;
+
 const SORT_COLUMNS: Record<ShearSort, string> = {
   tagCode: 'shear.tagCode',
   make: 'shear.make',
@@ -29,9 +32,10 @@ interface SummaryRaw {
   stop_name: string | null;
   photo_count: number;
   last_serviced_on: string | null;
+  sharpening_count: number;
 }
 
-/** Shears with their customer, the customer's stop, photo count and last service date. */
+/** Shears with their customer, the customer's stop, photo count, last service date and times sharpened. */
 export function shearSummaryQuery(shears: Repository<Shear>): SelectQueryBuilder<Shear> {
   return shears
     .createQueryBuilder('shear')
@@ -41,7 +45,8 @@ export function shearSummaryQuery(shears: Repository<Shear>): SelectQueryBuilder
     .addSelect('stop.id', 'stop_id')
     .addSelect('stop.name', 'stop_name')
     .addSelect(PHOTO_COUNT, 'photo_count')
-    .addSelect(LAST_SERVICED, 'last_serviced_on');
+    .addSelect(LAST_SERVICED, 'last_serviced_on')
+    .addSelect(SHARPENING_COUNT, 'sharpening_count');
 }
 
 /** The list's filters and search; a search that reads as a tag code ("kr 12", "000012") also matches it exactly. */
@@ -87,6 +92,7 @@ export async function fetchShearRows(
       stop: refOrNull(row?.stop_id ?? null, row?.stop_name ?? null),
       photoCount: row?.photo_count ?? 0,
       lastServicedOn: row?.last_serviced_on ?? null,
+      sharpeningCount: row?.sharpening_count ?? 0,
     };
     return { shear, extras };
   });

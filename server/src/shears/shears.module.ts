@@ -13,6 +13,6 @@ import { ShearsService } from './shears.service';
   imports: [TypeOrmModule.forFeature([Shear, ShearPhoto, ShearHistoryEntry])],
   controllers: [ShearsController, ShearPhotosController],
   providers: [ShearsService, ShearPhotosService, ShearLabelsService],
-  exports: [ShearsService],
+  exports: [ShearsService, ShearPhotosService],
 })
 export class ShearsModule {}

@@ -3,6 +3,8 @@ import { CreateRateCards1764720000000 } from './1764720000000-CreateRateCards';
 import { CreateRegistry1764806400000 } from './1764806400000-CreateRegistry';
 import { CreateCsvImports1764806400001 } from './1764806400001-CreateCsvImports';
 import { CreateRouteDays1764892800000 } from './1764892800000-CreateRouteDays';
+import { CreateBookings1764979200000 } from './1764979200000-CreateBookings';
+import { CreateTickets1764979200001 } from './1764979200001-CreateTickets';
 
 /** Listed explicitly, oldest first, so the CLI, the app and jest load the same migrations without globs. */
 export const migrations = [
@@ -11,4 +13,6 @@ export const migrations = [
   CreateRegistry1764806400000,
   CreateCsvImports1764806400001,
   CreateRouteDays1764892800000,
+  CreateBookings1764979200000,
+  CreateTickets1764979200001,
 ];

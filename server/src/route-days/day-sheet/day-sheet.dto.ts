@@ -1,4 +1,5 @@
 import { ApiProperty } from '@nestjs/swagger';
+import { SheetBookingDto } from '../../bookings/dto/booking-response.dto';
 import { MinuteWindowDto, RouteDayDto } from '../dto/route-day-response.dto';
 
 export class SheetCustomerDto {
@@ -27,8 +28,8 @@ export class SheetStopDto {
   @ApiProperty() benchMinutes: number;
   @ApiProperty({ description: 'Pairs expected: the shears in service at the stop' }) expectedPairs: number;
   @ApiProperty({ type: [SheetCustomerDto] }) customers: SheetCustomerDto[];
-  @ApiProperty({ type: [Object], description: 'Drop-offs booked for this visit (filled once bookings exist)' })
-  bookings: never[];
+  @ApiProperty({ type: [SheetBookingDto], description: 'Drop-offs booked for this visit (cancelled ones left off)' })
+  bookings: SheetBookingDto[];
 }
 
 export class SheetTotalsDto {

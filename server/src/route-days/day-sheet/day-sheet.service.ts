@@ -4,6 +4,7 @@ import { BENCH_CAUTIONS } from '@keenroute/shared';
 import type { DataSource } from 'typeorm';
 import { RouteDayAccess } from '../../access/route-day-access';
 import type { Actor } from '../../auth/actor';
+import { bookingsForSheet } from '../../bookings/day-sheet-bookings';
 import { ExpectedBenchService } from '../planning/expected-bench';
 import { RouteDaysService } from '../route-days.service';
 import type { DaySheetDto, SheetCustomerDto } from './day-sheet.dto';
@@ -44,6 +45,7 @@ export class DaySheetService {
     );
     const customers = await this.customers(stopIds);
     const bench = await this.expectedBench.forStops(stopIds);
+    const bookings = await bookingsForSheet(this.dataSource.manager, id);
     return {
       routeDay,
       stops: routeDay.stops.map((stop) => {
@@ -66,7 +68,7 @@ export class DaySheetService {
           benchMinutes: stop.benchMinutes,
           expectedPairs: bench.get(stop.stopId)?.pairs ?? 0,
           customers: customers.get(stop.stopId) ?? [],
-          bookings: [],
+          bookings: bookings.get(stop.stopId) ?? [],
         };
       }),
       totals: {

@@ -8,6 +8,7 @@ import {
   IsIn,
   IsInt,
   IsNumber,
+  IsOptional,
   IsString,
   Length,
   Max,
@@ -95,4 +96,18 @@ export class PlanningSettingsDto {
   @Min(1)
   @Max(30, { message: 'solveSeconds is 1 to 30.' })
   solveSeconds: number;
+
+  @ApiProperty({ description: 'Bookings for a route day close this many days before it (default 1)', required: false })
+  @IsOptional()
+  @IsInt({ message: 'bookingCutoffDaysBefore is whole days, 0 to 14.' })
+  @Min(0, { message: 'bookingCutoffDaysBefore is whole days, 0 to 14.' })
+  @Max(14, { message: 'bookingCutoffDaysBefore is whole days, 0 to 14.' })
+  bookingCutoffDaysBefore?: number;
+
+  @ApiProperty({ description: 'At this hour, 0-23, in the business time zone (default 18)', required: false })
+  @IsOptional()
+  @IsInt({ message: 'bookingCutoffHour is an hour of the day, 0 to 23.' })
+  @Min(0, { message: 'bookingCutoffHour is an hour of the day, 0 to 23.' })
+  @Max(23, { message: 'bookingCutoffHour is an hour of the day, 0 to 23.' })
+  bookingCutoffHour?: number;
 }

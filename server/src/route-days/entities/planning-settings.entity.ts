@@ -53,6 +53,13 @@ export class PlanningSettings {
   @Column({ name: 'solve_seconds', type: 'smallint' })
   solveSeconds: number;
 
+  /** Bookings for a route day close this many days before it, at `bookingCutoffHour` (business time zone). */
+  @Column({ name: 'booking_cutoff_days_before', type: 'smallint', default: 1 })
+  bookingCutoffDaysBefore: number;
+
+  @Column({ name: 'booking_cutoff_hour', type: 'smallint', default: 18 })
+  bookingCutoffHour: number;
+
   @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' })
   updatedAt: Date;
 }

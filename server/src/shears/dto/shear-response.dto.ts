@@ -35,6 +35,7 @@ export class ShearSummaryDto {
   @ApiProperty({ type: RefDto, nullable: true, description: "The customer's stop" }) stop: RefDto | null;
   @ApiProperty() photoCount: number;
   @ApiProperty({ nullable: true, type: String, example: '2025-03-14' }) lastServicedOn: string | null;
+  @ApiProperty({ description: "Times sharpened: the 'serviced' rows of its history" }) sharpeningCount: number;
 }
 
 export class ShearPhotoDto {
@@ -72,6 +73,7 @@ export interface ShearExtras {
   stop: RefDto | null;
   photoCount: number;
   lastServicedOn: string | null;
+  sharpeningCount: number;
 }
 
 export const toShearSummary = (shear: Shear, extras: ShearExtras): ShearSummaryDto => ({

@@ -1,0 +1,53 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import type { DataSource } from 'typeorm';
+import { TicketAccess } from '../../access/ticket-access';
+import type { Actor } from '../../auth/actor';
+import type { TicketDto } from '../dto/ticket-response.dto';
+import { Ticket } from '../entities/ticket.entity';
+import { TicketReader } from '../ticket-reader';
+import { TicketWriter } from '../ticket-writer';
+import type { RecordPaymentDto } from './dto/record-payment.dto';
+import { Payment } from './payment.entity';
+import { checkPayment, checkToInvoice, paidCents } from './settlement';
+
+/** Payments taken on site (cash, cheque, card on a terminal) and "leave it for an invoice". */
+@Injectable()
+export class TicketPaymentsService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly access: TicketAccess,
+    private readonly writer: TicketWriter,
+    private readonly reader: TicketReader,
+  ) {}
+
+  async record(actor: Actor, ticketId: string, dto: RecordPaymentDto): Promise<TicketDto> {
+    await this.access.requireTicket(actor, ticketId, 'work');
+    await this.dataSource.transaction(async (manager) => {
+      const ticket = await this.writer.lock(manager, ticketId);
+      const payments = manager.getRepository(Payment);
+      const paid = paidCents(await payments.findBy({ ticketId: ticket.id }));
+      const reference = dto.method === 'cash' ? '' : (dto.reference ?? '');
+      const settlement = checkPayment(ticket, paid, { method: dto.method, amountCents: dto.amountCents, reference });
+      await payments.insert({
+        ticketId: ticket.id,
+        method: dto.method,
+        amountCents: dto.amountCents,
+        reference,
+        recordedBy: actor.id,
+      });
+      if (settlement !== ticket.settlement) await manager.getRepository(Ticket).update(ticket.id, { settlement });
+    });
+    return this.reader.detail(ticketId);
+  }
+
+  async leaveForInvoice(actor: Actor, ticketId: string): Promise<TicketDto> {
+    await this.access.requireTicket(actor, ticketId, 'work');
+    await this.dataSource.transaction(async (manager) => {
+      const ticket = await this.writer.lock(manager, ticketId);
+      checkToInvoice(ticket);
+      await manager.getRepository(Ticket).update(ticket.id, { settlement: 'to-invoice' });
+    });
+    return this.reader.detail(ticketId);
+  }
+}
