@@ -225,6 +225,7 @@ describe('route days (e2e)', () => {
   });
 
   describe('moving and locking', () => {
+    let bookedStopId: string | undefined;
     const week = async () =>
       mine((await http().get(`/api/route-days?week=${nextWeek}`).set(bearer('office')).expect(200)).body as WeekDto);
 
@@ -306,10 +307,43 @@ describe('route days (e2e)', () => {
       expect((unlocked.body as RouteDayDto).stops[1]).toMatchObject({ locked: false, positionLocked: false });
     });
 
+    it('keeps a stop with drop-offs booked on its day: no moving it off, and re-planning leaves it there', async () => {
+      const days = await week();
+      const day = days.find((d) => d.stops.length > 0 && d.stops.some((s) => !s.positionLocked))!;
+      const booked = day.stops.find((s) => !s.positionLocked)!;
+      bookedStopId = booked.stopId;
+      await http().post(`/api/route-days/${day.id}/stops/${booked.stopId}/unlock`).set(bearer('office')).expect(200);
+      await http()
+        .post('/api/public/bookings')
+        .send({
+          stopId: booked.stopId,
+          routeDayId: day.id,
+          mailIn: false,
+          name: 'Route Test Groomer',
+          email: `route-${randomUUID().slice(0, 6)}@e2e.keenroute.test`,
+          phone: '555-0100',
+          consent: true,
+          items: [{ toolKind: 'straight', edgeType: 'beveled', count: 2 }],
+          website: '',
+          idempotencyKey: randomUUID(),
+        })
+        .expect(201);
+      const other = days.find((d) => d.id !== day.id)!;
+      const refused = await http()
+        .post(`/api/route-days/${other.id}/stops`)
+        .set(bearer('office'))
+        .send({ stopId: booked.stopId, position: 0 })
+        .expect(409);
+      expect(refused.body.message).toMatch(/drop-off/);
+      await http().delete(`/api/route-days/${day.id}/stops/${booked.stopId}`).set(bearer('office')).expect(409);
+      const replanned = mine(await plan());
+      expect(replanned.find((d) => d.id === day.id)!.stops.map((s) => s.stopId)).toContain(booked.stopId);
+    });
+
     it('takes a stop off a day into the unplanned list', async () => {
       const days = await week();
-      const day = days.find((d) => d.stops.length > 0)!;
-      const off = day.stops[0]!.stopId;
+      const day = days.find((d) => d.stops.some((s) => s.stopId !== bookedStopId))!;
+      const off = day.stops.find((s) => s.stopId !== bookedStopId)!.stopId;
       await http().delete(`/api/route-days/${day.id}/stops/${off}`).set(bearer('office')).expect(200);
       const after = (await http().get(`/api/route-days?week=${nextWeek}`).set(bearer('office')).expect(200))
         .body as WeekDto;

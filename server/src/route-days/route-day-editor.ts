@@ -56,6 +56,7 @@ export class RouteDayEditor {
           throw new DomainError('forbidden', 'You may re-order the stops on your own days; the office adds new ones.');
         }
       }
+      if (from && from.routeDayId !== day.id) await this.refuseIfBooked(manager, from.routeDayId, dto.stopId);
       const stop = await this.stopFacts(manager, dto.stopId);
       if (!stop || !stop.active) throw notFound('The stop');
       if (stop.latitude === null || stop.longitude === null) {
@@ -95,6 +96,7 @@ export class RouteDayEditor {
       const day = await this.lockDay(manager, target.id);
       const found = await manager.findOneBy(RouteDayStop, { routeDayId: day.id, stopId });
       if (!found) throw notFound('The stop on this route day');
+      await this.refuseIfBooked(manager, day.id, stopId);
       await manager.delete(RouteDayStop, { id: found.id });
       await this.retime(manager, day, await this.stopsOf(manager, day.id));
       const week = weekStart(day.day);
@@ -118,6 +120,20 @@ export class RouteDayEditor {
       await manager.save(found);
       await manager.save(day); // bumps the version: the day changed
     });
+  }
+
+  /** Customers were told this day for their drop-offs: the stop stays until those bookings are moved or cancelled. */
+  private async refuseIfBooked(manager: EntityManager, routeDayId: string, stopId: string): Promise<void> {
+    const [row] = await manager.query<{ n: number }[]>(
+      `SELECT count(*)::int AS n FROM bookings WHERE route_day_id = $1 AND stop_id = $2 AND status <> 'cancelled'`,
+      [routeDayId, stopId],
+    );
+    if (row && row.n > 0) {
+      throw new DomainError(
+        'conflict',
+        `${row.n} drop-off${row.n === 1 ? ' is' : 's are'} booked for this stop on this day: move or cancel ${row.n === 1 ? 'it' : 'them'} first.`,
+      );
+    }
   }
 
   private async lockDay(manager: EntityManager, id: string): Promise<RouteDay> {

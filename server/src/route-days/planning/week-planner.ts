@@ -181,7 +181,10 @@ export class WeekPlanner {
   private candidates(weekStart: string, weekEnd: string, sharpenerIds: string[], today: string, unassigned: boolean) {
     return this.dataSource.query<CandidateRow[]>(
       `WITH week_stops AS (
-         SELECT rds.stop_id, rds.locked, rds.position_locked, rds.position, rd.day::text AS day, rd.sharpener_id
+         -- A stop with drop-offs booked for its day stays on that day: the customers were told it.
+         SELECT rds.stop_id, rds.position_locked, rds.position, rd.day::text AS day, rd.sharpener_id,
+                rds.locked OR EXISTS (SELECT 1 FROM bookings b WHERE b.route_day_id = rd.id AND b.stop_id = rds.stop_id
+                                      AND b.status <> 'cancelled') AS locked
            FROM route_day_stops rds JOIN route_days rd ON rd.id = rds.route_day_id
           WHERE rd.day BETWEEN $1 AND $2)
        SELECT s.id, s.latitude, s.longitude, s.opening_hours, s.closed_dates::text[] AS closed_dates,
