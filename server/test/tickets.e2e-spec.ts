@@ -291,6 +291,12 @@ describe('tickets (e2e)', () => {
       ]);
       const read = await http().get(`/api/shears/${shear.id}`).set(as('office')).expect(200);
       expect(read.body).toMatchObject({ sharpeningCount: 1, lastServicedOn: today });
+      // The stop counts as worked today, once, so its next due date moves on.
+      const visits = await db.query<{ n: number }[]>(
+        `SELECT count(*)::int AS n FROM stop_visits WHERE stop_id = $1 AND worked_on = $2::date`,
+        [finished.stop!.id, today],
+      );
+      expect(visits[0]!.n).toBe(1);
 
       const back = (await http().post(`/api/tickets/${ticket.id}/hand-back`).set(as('sharpener')).expect(200))
         .body as TicketDto;

@@ -88,9 +88,25 @@ export class TicketClosing {
         recordedBy: actor.id,
       })),
     );
+    if (ticket.stopId && ticket.kind !== 'drop-off') await recordStopVisit(manager, ticket, actor);
     ticket.status = 'finished';
     ticket.finishedAt = new Date();
     await manager.getRepository(Ticket).save(ticket);
     await handBackIfAllReturned(manager, ticket);
   }
+}
+
+/**
+ * A finished ticket at a stop means the stop was worked that day: its visit is recorded once (the next due date counts
+ * from it), by the route day's sharpener when there is one. The advisory lock keeps two tickets finishing together
+ * from both inserting.
+ */
+async function recordStopVisit(manager: EntityManager, ticket: Ticket, actor: Actor): Promise<void> {
+  await manager.query('SELECT pg_advisory_xact_lock(hashtext($1))', [`stop-visit:${ticket.stopId}:${ticket.visitDay}`]);
+  await manager.query(
+    `INSERT INTO stop_visits (stop_id, worked_on, sharpener_id)
+     SELECT $1, $2::date, COALESCE((SELECT sharpener_id FROM route_days WHERE id = $3), $4)
+      WHERE NOT EXISTS (SELECT 1 FROM stop_visits WHERE stop_id = $1 AND worked_on = $2::date)`,
+    [ticket.stopId, ticket.visitDay, ticket.routeDayId, actor.role === 'office' ? null : actor.id],
+  );
 }
