@@ -558,6 +558,36 @@ describe('tickets (e2e)', () => {
       await open('otherSharpener', { customerId: customer.elsewhere, kind: 'walk-up' }, 201);
     });
 
+    it("registers a new walk-up customer at the stop, but only on the sharpener's own day", async () => {
+      const name = `Walk-up ${randomUUID().slice(0, 6)}`;
+      const response = await http()
+        .post('/api/tickets/walk-up')
+        .set(as('sharpener'))
+        .send({ stopId: stop.mine, customer: { name, phone: '555-0142' } })
+        .expect(201);
+      expect(response.body).toMatchObject({ kind: 'walk-up', routeDayId, customer: { name, phone: '555-0142' } });
+      const refusedName = `Refused ${randomUUID().slice(0, 6)}`;
+      await http()
+        .post('/api/tickets/walk-up')
+        .set(as('sharpener'))
+        .send({ stopId: stop.elsewhere, customer: { name: refusedName } })
+        .expect(403);
+      const left = await db.query<{ n: number }[]>(`SELECT count(*)::int AS n FROM customers WHERE name = $1`, [
+        refusedName,
+      ]);
+      expect(left[0]!.n).toBe(0);
+      await http()
+        .post('/api/tickets/walk-up')
+        .set(as('sharpener'))
+        .send({ stopId: stop.mine, customer: { name: '' } })
+        .expect(400);
+      await http()
+        .post('/api/tickets/walk-up')
+        .set(as('client'))
+        .send({ stopId: stop.mine, customer: { name } })
+        .expect(403);
+    });
+
     it('answers 404 for an unknown ticket and 400 for a malformed id or filter', async () => {
       await http().get(`/api/tickets/${randomUUID()}`).set(as('owner')).expect(404);
       await http().get('/api/tickets/not-an-id').set(as('owner')).expect(400);

@@ -24,6 +24,8 @@ import { TicketPaymentsService } from './payments/ticket-payments.service';
 import { TicketClosing } from './ticket-closing';
 import { TicketReader } from './ticket-reader';
 import { TicketsService } from './tickets.service';
+import { WalkUpService } from './walk-up.service';
+import { WalkUpDto } from './dto/walk-up.dto';
 
 @ApiTags('tickets')
 @ApiBearerAuth()
@@ -34,6 +36,7 @@ export class TicketsController {
     private readonly reader: TicketReader,
     private readonly closing: TicketClosing,
     private readonly payments: TicketPaymentsService,
+    private readonly walkUps: WalkUpService,
   ) {}
 
   /** Sharpeners see the tickets on their route days; clients their own. */
@@ -41,6 +44,12 @@ export class TicketsController {
   @Get()
   list(@CurrentUser() actor: Actor, @Query() query: ListTicketsQueryDto): Promise<TicketListDto> {
     return this.reader.list(actor, query);
+  }
+
+  @Roles('owner', 'office', 'sharpener')
+  @Post('walk-up')
+  walkUp(@CurrentUser() actor: Actor, @Body() dto: WalkUpDto): Promise<TicketDto> {
+    return this.walkUps.open(actor, dto);
   }
 
   @Roles('owner', 'office', 'sharpener')

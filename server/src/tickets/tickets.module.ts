@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { CustomersModule } from '../customers/customers.module';
 import { ShearsModule } from '../shears/shears.module';
 import { CheckInController } from './check-in.controller';
 import { CheckInService } from './check-in.service';
@@ -15,9 +16,10 @@ import { TicketReader } from './ticket-reader';
 import { TicketWriter } from './ticket-writer';
 import { TicketsController } from './tickets.controller';
 import { TicketsService } from './tickets.service';
+import { WalkUpService } from './walk-up.service';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([Ticket, TicketLine, TicketLineOverride, Payment]), ShearsModule],
+  imports: [TypeOrmModule.forFeature([Ticket, TicketLine, TicketLineOverride, Payment]), ShearsModule, CustomersModule],
   controllers: [TicketsController, TicketPhotosController, CheckInController],
   providers: [
     TicketsService,
@@ -27,6 +29,7 @@ import { TicketsService } from './tickets.service';
     TicketPaymentsService,
     TicketPhotosService,
     CheckInService,
+    WalkUpService,
   ],
   exports: [TicketReader],
 })
