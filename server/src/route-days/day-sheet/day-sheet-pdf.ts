@@ -1,4 +1,4 @@
-import { formatTimeOfDay, WEEKDAY_LABELS } from '@keenroute/shared';
+import { EDGE_TYPE_LABELS, formatTimeOfDay, TOOL_KIND_LABELS, WEEKDAY_LABELS } from '@keenroute/shared';
 import PDFDocument from 'pdfkit';
 import type { DaySheetDto, SheetStopDto } from './day-sheet.dto';
 
@@ -61,6 +61,12 @@ function drawStop(doc: PDFKit.PDFDocument, stop: SheetStopDto): void {
     `Planned ${time(stop.arrival)}–${time(stop.leave)} · ${stop.benchMinutes} bench min · ${stop.expectedPairs} pairs expected · ` +
       `${stop.customers.length} customers`,
   );
+  for (const booking of stop.bookings) {
+    const items = booking.items
+      .map((item) => `${item.count} × ${EDGE_TYPE_LABELS[item.edgeType]} ${TOOL_KIND_LABELS[item.toolKind]}`)
+      .join(', ');
+    doc.text(`Drop-off: ${booking.name}${booking.phone ? ` (${booking.phone})` : ''}: ${items}`);
+  }
   doc.fillColor(GREY);
   if (stop.accessParking) doc.text(`Parking: ${stop.accessParking}`);
   if (stop.accessDoor) doc.text(`Door: ${stop.accessDoor}`);
