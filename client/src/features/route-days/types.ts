@@ -1,3 +1,4 @@
+import type { SheetBooking } from '@/features/bookings/components/stop-bookings';
 import type { Weekday } from '@keenroute/shared';
 
 export interface Ref {
@@ -134,6 +135,7 @@ export interface SheetStop {
   benchMinutes: number;
   expectedPairs: number;
   customers: SheetCustomer[];
+  bookings: SheetBooking[];
 }
 
 export interface DayTotals {

@@ -7,11 +7,11 @@ export const ROLE_OUTLOOK: Record<Role, string[]> = {
     'Business settings',
     'The week plan, tickets and invoices the office will see',
   ],
-  office: ['Week plan: route days proposed from the stops coming due', 'Drop-offs, tickets and invoices'],
+  office: ['Week plan: route days proposed from the stops coming due', 'Tickets and invoices'],
   sharpener: [
     'Today: the day sheet on your phone, stops in order with arrival times',
     'My week: the route days planned for you',
     'Tickets: shears, edge recipes and payments taken on site',
   ],
-  client: ['Book a drop-off for the next route day, or mail-in', 'My invoices, paid online'],
+  client: ['My invoices, paid online'],
 };

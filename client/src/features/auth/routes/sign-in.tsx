@@ -1,8 +1,8 @@
-import { Alert } from '@mantine/core';
+import { Alert, Anchor, Text } from '@mantine/core';
 import { IconClockHour4 } from '@tabler/icons-react';
-import { Navigate, useSearchParams } from 'react-router-dom';
+import { Link, Navigate, useSearchParams } from 'react-router-dom';
 import { PageLoader } from '@/components/page-loader';
-import { safeRedirect } from '@/config/paths';
+import { paths, safeRedirect } from '@/config/paths';
 import { useSession } from '@/lib/session';
 import { AuthLayout } from '../components/auth-layout';
 import { SignInForm } from '../components/sign-in-form';
@@ -23,6 +23,12 @@ export function SignInRoute() {
         </Alert>
       ) : null}
       <SignInForm />
+      <Text size="sm" c="dimmed" ta="center">
+        Leaving shears at your stop? No account needed:{' '}
+        <Anchor component={Link} to={paths.bookings.book.getHref()} fw={600}>
+          Book a drop-off
+        </Anchor>
+      </Text>
     </AuthLayout>
   );
 }

@@ -69,7 +69,16 @@ describe('the day sheet', { timeout: 30_000 }, () => {
       'tel:+15550111',
     );
     expect(paws).not.toHaveTextContent('Parking');
-    expect(within(paws).queryByRole('link')).not.toBeInTheDocument();
+    expect(within(paws).getAllByRole('link').map((link) => link.getAttribute('aria-label'))).toEqual([
+      'Work Paws and Polish',
+    ]);
+    expect(within(maple).getByRole('link', { name: 'Work Maple Street Salon' })).toHaveAttribute(
+      'href',
+      '/route-days/rd-mon-sasha/stops/s-maple',
+    );
+    expect(maple).toHaveTextContent('Cy Groomer');
+    expect(maple).toHaveTextContent('Left in the blue case');
+    expect(paws).toHaveTextContent('No drop-offs booked for this stop.');
 
     const cautions = screen.getByRole('region', { name: 'At the bench' });
     expect(cautions).toHaveTextContent('Wear a dust mask or use extraction at the grinder.');

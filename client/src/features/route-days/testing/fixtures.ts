@@ -154,6 +154,18 @@ export const sheet = (overrides: Partial<DaySheet> = {}): DaySheet => ({
         { id: 'c-ada', name: 'Ada Clipper', phone: '+1 555 0111', email: null, shearCount: 3 },
         { id: 'c-bo', name: 'Bo Trimmer', phone: null, email: 'bo@demo.keenroute.test', shearCount: 2 },
       ],
+      bookings: [
+        {
+          id: 'b-cy',
+          name: 'Cy Groomer',
+          phone: '+1 555 0122',
+          email: 'cy@demo.keenroute.test',
+          notes: 'Left in the blue case',
+          status: 'booked',
+          items: [{ toolKind: 'straight', edgeType: 'convex', count: 2 }],
+          benchMinutes: 36,
+        },
+      ],
     },
     {
       position: 1,
@@ -173,6 +185,7 @@ export const sheet = (overrides: Partial<DaySheet> = {}): DaySheet => ({
       benchMinutes: 45,
       expectedPairs: 3,
       customers: [],
+      bookings: [],
     },
   ],
   totals: { stops: 2, distanceKm: 24.6, driveMinutes: 55, benchMinutes: 115, departure: 8 * 60, finish: 11 * 60 + 25 },

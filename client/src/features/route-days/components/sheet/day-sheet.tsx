@@ -68,7 +68,7 @@ export function DaySheetView({ routeDayId }: { routeDayId: string }) {
         <>
           <Stack component="ol" gap="md" p={0} m={0} style={{ listStyle: 'none' }} aria-label="Stops in order">
             {stops.map((stop) => (
-              <SheetStopCard key={stop.stopId} stop={stop} />
+              <SheetStopCard key={stop.stopId} stop={stop} routeDayId={routeDay.id} />
             ))}
           </Stack>
           <RouteDayMap

@@ -1,5 +1,8 @@
-import { Anchor, Badge, Card, Divider, Group, List, Stack, Text, Title } from '@mantine/core';
-import { IconMail, IconPhone } from '@tabler/icons-react';
+import { Anchor, Badge, Button, Card, Divider, Group, List, Stack, Text, Title } from '@mantine/core';
+import { IconMail, IconPhone, IconScissors } from '@tabler/icons-react';
+import { Link } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { StopBookings } from '@/features/bookings/components/stop-bookings';
 import { duration, timeOfDay, timeRange } from '../../format';
 import type { SheetStop } from '../../types';
 
@@ -14,7 +17,7 @@ function telHref(phone: string): string {
 }
 
 /** One stop of the day sheet, big enough to read and tap on a phone at arm's length. */
-export function SheetStopCard({ stop }: { stop: SheetStop }) {
+export function SheetStopCard({ stop, routeDayId }: { stop: SheetStop; routeDayId: string }) {
   const notes = ACCESS.filter(({ field }) => stop[field].trim() !== '');
   const headingId = `sheet-stop-${stop.stopId}`;
   return (
@@ -79,6 +82,22 @@ export function SheetStopCard({ stop }: { stop: SheetStop }) {
             {stop.expectedPairs === 1 ? 'pair' : 'pairs'} expected
           </Text>
         </Group>
+
+        <Button
+          component={Link}
+          to={paths.routeDays.stopVisit.getHref(routeDayId, stop.stopId)}
+          size="md"
+          leftSection={<IconScissors size={20} aria-hidden="true" />}
+          aria-label={`Work ${stop.name}`}
+        >
+          Work this stop
+        </Button>
+
+        <Divider />
+        <Stack gap={4}>
+          <Text fw={600}>Drop-offs booked</Text>
+          <StopBookings bookings={stop.bookings} />
+        </Stack>
 
         {stop.customers.length > 0 ? (
           <>
