@@ -26,6 +26,21 @@ export const routes: RouteObject[] = [
         lazy: async () => ({ Component: (await import('@/features/auth/routes/set-password')).SetPasswordRoute }),
       },
       {
+        path: paths.bookings.manage.path,
+        lazy: async () => ({
+          Component: (await import('@/features/bookings/routes/manage-booking')).ManageBookingRoute,
+        }),
+      },
+      {
+        lazy: async () => ({ Component: (await import('./layout/public-or-app-layout')).PublicOrAppLayout }),
+        children: [
+          {
+            path: paths.bookings.book.path,
+            lazy: async () => ({ Component: (await import('@/features/bookings/routes/book')).BookRoute }),
+          },
+        ],
+      },
+      {
         element: <RequireAuth />,
         children: [
           {
@@ -98,6 +113,66 @@ export const routes: RouteObject[] = [
                 ],
               },
               {
+                element: <RequireRole roles={paths.weekPlan.roles} />,
+                children: [
+                  {
+                    path: paths.weekPlan.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/route-days/routes/week-plan')).WeekPlanRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.today.roles} />,
+                children: [
+                  {
+                    path: paths.today.path,
+                    lazy: async () => ({ Component: (await import('@/features/route-days/routes/today')).TodayRoute }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.routeDays.sheet.roles} />,
+                children: [
+                  {
+                    path: paths.routeDays.sheet.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/route-days/routes/day-sheet')).DaySheetRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.routeDays.stopVisit.roles} />,
+                children: [
+                  {
+                    path: paths.routeDays.stopVisit.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/tickets/routes/stop-visit')).StopVisitRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.tickets.list.roles} />,
+                children: [
+                  {
+                    path: paths.tickets.list.path,
+                    lazy: async () => ({ Component: (await import('@/features/tickets/routes/tickets')).TicketsRoute }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.tickets.detail.roles} />,
+                children: [
+                  {
+                    path: paths.tickets.detail.path,
+                    lazy: async () => ({ Component: (await import('@/features/tickets/routes/ticket')).TicketRoute }),
+                  },
+                ],
+              },
+              {
                 element: <RequireRole roles={paths.comingDue.roles} />,
                 children: [
                   {
@@ -157,6 +232,17 @@ export const routes: RouteObject[] = [
                     path: paths.shears.mine.path,
                     lazy: async () => ({
                       Component: (await import('@/features/shears/routes/my-shears')).MyShearsRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.bookings.list.roles} />,
+                children: [
+                  {
+                    path: paths.bookings.list.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/bookings/routes/drop-offs')).DropOffsRoute,
                     }),
                   },
                 ],

@@ -1,9 +1,15 @@
 import type { Role } from '@keenroute/shared';
 import {
   IconBuildingStore,
+  IconCalendarWeek,
+  IconRoute,
+  IconSun,
+  IconTicket,
   IconCalendarDue,
+  IconCalendarPlus,
   IconFileImport,
   IconHome2,
+  IconInbox,
   IconScissors,
   IconUsers,
   IconListNumbers,
@@ -35,6 +41,34 @@ export const NAV_ITEMS: readonly NavItem[] = [
     summary: 'Your role, what Keenroute lets you do, and the cautions of the bench.',
   },
   {
+    label: 'Today',
+    href: paths.today.getHref(),
+    icon: IconSun,
+    roles: ['sharpener'],
+    summary: 'Your route day today as a day sheet: stops in order, arrival windows, access notes and customers.',
+  },
+  {
+    label: 'My week',
+    href: paths.weekPlan.getHref(),
+    icon: IconCalendarWeek,
+    roles: ['sharpener'],
+    summary: 'Your route days this week, with a calendar feed for your phone.',
+  },
+  {
+    label: 'Week plan',
+    href: paths.weekPlan.getHref(),
+    icon: IconRoute,
+    roles: ['owner', 'office'],
+    summary: 'Plan the week’s route days, then drag stops between days and sharpeners; print the day sheets.',
+  },
+  {
+    label: 'Tickets',
+    href: paths.tickets.list.getHref(),
+    icon: IconTicket,
+    roles: paths.tickets.list.roles,
+    summary: 'Each customer’s shears on a visit or drop-off: bench status per shear, price, hand back and payment.',
+  },
+  {
     label: 'Coming due',
     href: paths.comingDue.getHref(),
     icon: IconCalendarDue,
@@ -63,11 +97,26 @@ export const NAV_ITEMS: readonly NavItem[] = [
     summary: 'Every registered shear by tag code, with its edge recipe, photos and service history.',
   },
   {
+    label: 'Drop-offs',
+    href: paths.bookings.list.getHref(),
+    icon: IconInbox,
+    roles: paths.bookings.list.roles,
+    summary:
+      'Shears booked online to be left at a stop for its route day, or mailed in, with the bench time they take.',
+  },
+  {
     label: 'My shears',
     href: paths.shears.mine.getHref(),
     icon: IconScissors,
     roles: paths.shears.mine.roles,
     summary: 'Your shears, their tag codes and when each was last sharpened.',
+  },
+  {
+    label: 'Book a drop-off',
+    href: paths.bookings.book.getHref(),
+    icon: IconCalendarPlus,
+    roles: ['client'],
+    summary: 'Leave your shears at your stop for its next route day, or mail them in, with an estimate of the price.',
   },
   {
     label: 'Import',

@@ -10,6 +10,8 @@ const OWNER_ONLY: readonly Role[] = ['owner'];
 const ADMIN_ROLES: readonly Role[] = ['owner', 'office'];
 const ADMIN_AND_SHARPENER: readonly Role[] = STAFF_ROLES;
 const CLIENT_ONLY: readonly Role[] = ['client'];
+// Those who work route days on the road: a sharpener, and an owner who sharpens too.
+const ROUTE_WORKERS: readonly Role[] = ['owner', 'sharpener'];
 
 export const paths = {
   home: { path: '/', roles: ROLES, getHref: () => '/' },
@@ -39,6 +41,31 @@ export const paths = {
     detail: { path: '/stops/:stopId', roles: STAFF_ROLES, getHref: (id: string) => `/stops/${id}` },
     edit: { path: '/stops/:stopId/edit', roles: ADMIN_ROLES, getHref: (id: string) => `/stops/${id}/edit` },
   },
+  // Week plan for owner and office, My week for a sharpener: one page, shaped by the role.
+  weekPlan: { path: '/week', roles: STAFF_ROLES, getHref: () => '/week' },
+  today: { path: '/today', roles: ROUTE_WORKERS, getHref: () => '/today' },
+  routeDays: {
+    sheet: {
+      path: '/route-days/:routeDayId/sheet',
+      roles: STAFF_ROLES,
+      getHref: (id: string) => `/route-days/${encodeURIComponent(id)}/sheet`,
+    },
+    // One stop of a route day as the sharpener works it: its customers, bookings and tickets.
+    stopVisit: {
+      path: '/route-days/:routeDayId/stops/:stopId',
+      roles: STAFF_ROLES,
+      getHref: (routeDayId: string, stopId: string) =>
+        `/route-days/${encodeURIComponent(routeDayId)}/stops/${encodeURIComponent(stopId)}`,
+    },
+  },
+  tickets: {
+    list: { path: '/tickets', roles: STAFF_ROLES, getHref: () => '/tickets' },
+    detail: {
+      path: '/tickets/:ticketId',
+      roles: STAFF_ROLES,
+      getHref: (id: string) => `/tickets/${encodeURIComponent(id)}`,
+    },
+  },
   comingDue: { path: '/coming-due', roles: ADMIN_AND_SHARPENER, getHref: () => '/coming-due' },
   customers: {
     list: { path: '/customers', roles: STAFF_ROLES, getHref: () => '/customers' },
@@ -48,6 +75,22 @@ export const paths = {
     list: { path: '/shears', roles: STAFF_ROLES, getHref: () => '/shears' },
     detail: { path: '/shears/:shearId', roles: ROLES, getHref: (id: string) => `/shears/${id}` },
     mine: { path: '/my-shears', roles: CLIENT_ONLY, getHref: () => '/my-shears' },
+  },
+  bookings: {
+    // Public: a visit notice links here with its stop and day; a signed-in person sees it inside the app.
+    book: {
+      path: '/book',
+      getHref: (stopId?: string, day?: string) => {
+        const query = new URLSearchParams();
+        if (stopId) query.set('stop', stopId);
+        if (stopId && day) query.set('day', day);
+        const search = query.toString();
+        return search ? `/book?${search}` : '/book';
+      },
+    },
+    // Public: the private link of the confirmation e-mail.
+    manage: { path: '/drop-off/:token', getHref: (token: string) => `/drop-off/${encodeURIComponent(token)}` },
+    list: { path: '/drop-offs', roles: STAFF_ROLES, getHref: () => '/drop-offs' },
   },
   imports: { path: '/imports', roles: ADMIN_ROLES, getHref: () => '/imports' },
   team: { path: '/team', roles: USER_ADMIN_ROLES, getHref: () => '/team' },

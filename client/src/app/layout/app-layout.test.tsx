@@ -10,12 +10,12 @@ import { RequireAuth } from '@/features/auth/components/require-auth';
 import { AppLayout } from './app-layout';
 
 // PRODUCT.md's plan, limited to the pages that exist now.
-const REGISTRY = ['Coming due', 'Stops', 'Customers', 'Shears'];
+const REGISTRY = ['Coming due', 'Stops', 'Customers', 'Shears', 'Drop-offs'];
 const EXPECTED_NAV: Record<Role, string[]> = {
   owner: ['Home', 'Week plan', 'Tickets', ...REGISTRY, 'Import', 'Edge recipes', 'Team', 'Rates', 'Outbox'],
   office: ['Home', 'Week plan', 'Tickets', ...REGISTRY, 'Import', 'Edge recipes', 'Team', 'Rates'],
   sharpener: ['Home', 'Today', 'My week', 'Tickets', ...REGISTRY, 'Edge recipes'],
-  client: ['Home', 'My shears'],
+  client: ['Home', 'My shears', 'Book a drop-off'],
 };
 
 function renderShell() {
