@@ -70,7 +70,7 @@ describe('route days (e2e)', () => {
     const created = (await http().post('/api/stops').set(bearer('office')).send(body).expect(201)).body as {
       id: string;
     };
-    stops.push({ id: created.id, name, openingHours: body.openingHours as OpeningHours });
+    stops.push({ id: created.id, name, openingHours: body.openingHours });
     return created.id;
   };
 

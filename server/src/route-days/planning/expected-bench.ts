@@ -1,14 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import {
-  benchMinutes,
-  edgeRecipe,
-  type BenchPair,
-  type EdgeType,
-  type Handedness,
-  type ShearUse,
-  type ToolKind,
-} from '@keenroute/shared';
+import { benchMinutes, type BenchPair, type EdgeType, type ToolKind } from '@keenroute/shared';
 import type { DataSource } from 'typeorm';
 
 export interface ExpectedBench {

@@ -69,9 +69,11 @@ describe('the day sheet', { timeout: 30_000 }, () => {
       'tel:+15550111',
     );
     expect(paws).not.toHaveTextContent('Parking');
-    expect(within(paws).getAllByRole('link').map((link) => link.getAttribute('aria-label'))).toEqual([
-      'Work Paws and Polish',
-    ]);
+    expect(
+      within(paws)
+        .getAllByRole('link')
+        .map((link) => link.getAttribute('aria-label')),
+    ).toEqual(['Work Paws and Polish']);
     expect(within(maple).getByRole('link', { name: 'Work Maple Street Salon' })).toHaveAttribute(
       'href',
       '/route-days/rd-mon-sasha/stops/s-maple',
