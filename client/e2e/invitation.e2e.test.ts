@@ -75,7 +75,18 @@ describe('the invitation journey', () => {
 
     await page.getByRole('heading', { level: 1, name: /^Good (morning|afternoon|evening), Morgan$/ }).waitFor();
     expect(new URL(page.url()).pathname).toBe('/');
-    expect(await navLabels(page)).toEqual(['Home', 'Coming due', 'Stops', 'Customers', 'Shears', 'Edge recipes']);
+    expect(await navLabels(page)).toEqual([
+      'Home',
+      'Today',
+      'My week',
+      'Tickets',
+      'Coming due',
+      'Stops',
+      'Customers',
+      'Shears',
+      'Drop-offs',
+      'Edge recipes',
+    ]);
     expect(await page.getByTestId('signed-in-as').textContent()).toContain('Sharpener');
     await screenshot(page, 'invitation-signed-in');
 

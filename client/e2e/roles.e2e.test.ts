@@ -13,14 +13,20 @@ import {
   type Browser,
 } from './browser';
 
-const REGISTRY_PAGES = ['Home', 'Coming due', 'Stops', 'Customers', 'Shears'];
+const REGISTRY_PAGES = ['Coming due', 'Stops', 'Customers', 'Shears', 'Drop-offs'];
 
 // PRODUCT.md's navigation plan, limited to the pages that exist now.
 const ROLE_PAGES: Record<Role, { label: string; nav: string[] }> = {
-  owner: { label: 'Owner', nav: [...REGISTRY_PAGES, 'Import', 'Edge recipes', 'Team', 'Rates', 'Outbox'] },
-  office: { label: 'Office', nav: [...REGISTRY_PAGES, 'Import', 'Edge recipes', 'Team', 'Rates'] },
-  sharpener: { label: 'Sharpener', nav: [...REGISTRY_PAGES, 'Edge recipes'] },
-  client: { label: 'Client', nav: ['Home', 'My shears'] },
+  owner: {
+    label: 'Owner',
+    nav: ['Home', 'Week plan', 'Tickets', ...REGISTRY_PAGES, 'Import', 'Edge recipes', 'Team', 'Rates', 'Outbox'],
+  },
+  office: {
+    label: 'Office',
+    nav: ['Home', 'Week plan', 'Tickets', ...REGISTRY_PAGES, 'Import', 'Edge recipes', 'Team', 'Rates'],
+  },
+  sharpener: { label: 'Sharpener', nav: ['Home', 'Today', 'My week', 'Tickets', ...REGISTRY_PAGES, 'Edge recipes'] },
+  client: { label: 'Client', nav: ['Home', 'My shears', 'Book a drop-off'] },
 };
 
 describe('each demo role in a browser', () => {

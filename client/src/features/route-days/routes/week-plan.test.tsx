@@ -95,7 +95,7 @@ describe('the week plan', { timeout: 30_000 }, () => {
     const { user } = renderWeek();
     const monday = await card('Monday, Mar 3 with Sasha Hone');
     await user.click(within(monday).getByRole('button', { name: 'Show the map' }));
-    const map = within(monday).getByRole('img', { name: 'Map of Monday, Mar 3 with Sasha Hone: 2 stops' });
+    const map = await within(monday).findByRole('img', { name: 'Map of Monday, Mar 3 with Sasha Hone: 2 stops' });
     const titles = [...map.querySelectorAll('g > title')].map((title) => title.textContent);
     expect(titles).toEqual(['Base: Workshop, 4 Anvil Lane', '1. Maple Street Salon', '2. Paws and Polish']);
     expect(map.querySelector('polyline')?.getAttribute('points')?.split(' ')).toHaveLength(4);
