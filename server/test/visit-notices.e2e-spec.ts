@@ -187,7 +187,7 @@ describe('visit notices (e2e)', () => {
       await allSent(barber.id, day, 1);
 
       const mail = await waitForMail(address('salon'), /^Keenroute visit on /);
-      expect(mail.subject).toMatch(/^Keenroute visit on \w{3} \d{1,2} \w{3}: expected 09:00–10:00$/);
+      expect(mail.subject).toMatch(/^Keenroute visit on \w{3} \d{1,2} \w{3,4}: expected 09:00–10:00$/);
       expect(mail.text).toContain(`${appUrl.replace(/\/$/, '')}/book?stop=${salon.id}&day=${day}`);
       expect(mail.text).toContain('between 09:00 and 10:00');
       expect(mail.text).toMatch(/estimate/);
