@@ -18,6 +18,7 @@ import { DevModule } from './dev/dev.module';
 import { GeocodingModule } from './geocoding/geocoding.module';
 import { HealthModule } from './health/health.module';
 import { ImportsModule } from './imports/imports.module';
+import { InvoicesModule } from './invoices/invoices.module';
 import { JobsModule } from './jobs/jobs.module';
 import { MailModule } from './mail/mail.module';
 import { RatesModule } from './rates/rates.module';
@@ -99,6 +100,7 @@ const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
     CalendarModule,
     BookingsModule,
     TicketsModule,
+    InvoicesModule,
     // Last: the notices and calendar routes under /route-days/ are literal paths that must match before :id.
     RouteDaysModule,
   ],

@@ -92,6 +92,23 @@ export const paths = {
     manage: { path: '/drop-off/:token', getHref: (token: string) => `/drop-off/${encodeURIComponent(token)}` },
     list: { path: '/drop-offs', roles: STAFF_ROLES, getHref: () => '/drop-offs' },
   },
+  invoices: {
+    list: { path: '/invoices', roles: ADMIN_ROLES, getHref: () => '/invoices' },
+    // The finished tickets left for an invoice, grouped by who pays: the office makes drafts from here.
+    create: { path: '/invoices/new', roles: ADMIN_ROLES, getHref: () => '/invoices/new' },
+    detail: {
+      path: '/invoices/:invoiceId',
+      roles: ROLES,
+      getHref: (id: string) => `/invoices/${encodeURIComponent(id)}`,
+    },
+    mine: { path: '/my-invoices', roles: CLIENT_ONLY, getHref: () => '/my-invoices' },
+  },
+  businessProfile: { path: '/settings/business', roles: ADMIN_ROLES, getHref: () => '/settings/business' },
+  // Public: the private pay link printed on the invoice and in its e-mail; done is where the checkout returns.
+  pay: {
+    page: { path: '/pay/:token', getHref: (token: string) => `/pay/${encodeURIComponent(token)}` },
+    done: { path: '/pay/:token/done', getHref: (token: string) => `/pay/${encodeURIComponent(token)}/done` },
+  },
   imports: { path: '/imports', roles: ADMIN_ROLES, getHref: () => '/imports' },
   team: { path: '/team', roles: USER_ADMIN_ROLES, getHref: () => '/team' },
   devOutbox: { path: '/dev/outbox', roles: OWNER_ONLY, getHref: () => '/dev/outbox' },

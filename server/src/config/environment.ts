@@ -1,5 +1,5 @@
 import { plainToInstance, Transform } from 'class-transformer';
-import { IsIn, IsInt, IsOptional, IsString, IsUrl, Max, Min, MinLength, validateSync } from 'class-validator';
+import { IsIn, IsInt, IsOptional, IsString, IsUrl, Matches, Max, Min, MinLength, validateSync } from 'class-validator';
 
 /** The environment the API reads, with the safe local defaults `npm start` relies on. */
 export class Environment {
@@ -78,6 +78,27 @@ export class Environment {
   @IsString()
   VISIT_NOTICE_CRON = '0 * * * *';
 
+  /** The payment service's secret API key (test mode locally: the stand-in accepts any key of this form). */
+  @IsString()
+  @Matches(/^(sk|rk)_(test|live)_[A-Za-z0-9_]+$/, {
+    message: 'STRIPE_SECRET_KEY must look like sk_test_… or sk_live_…',
+  })
+  STRIPE_SECRET_KEY = 'sk_test_keenroute_local_stand_in';
+
+  /** The signing secret of the webhook endpoint; events whose signature does not match are refused. */
+  @IsString()
+  @Matches(/^whsec_[A-Za-z0-9_]+$/, { message: 'STRIPE_WEBHOOK_SECRET must look like whsec_…' })
+  STRIPE_WEBHOOK_SECRET = 'whsec_keenroute_local_stand_in_secret';
+
+  /** Where the payment SDK sends its requests: the local stand-in (http://127.0.0.1:12111); unset: the real service. */
+  @IsOptional()
+  @IsUrl({ require_tld: false, require_protocol: true, protocols: ['http', 'https'] })
+  STRIPE_API_URL?: string;
+
+  /** When overdue-invoice reminders are queued (cron, in BUSINESS_TIME_ZONE); queueing twice sends nothing twice. */
+  @IsString()
+  INVOICE_REMINDER_CRON = '15 8 * * *';
+
   /** Sign-in attempts allowed per e-mail and address in one minute. */
   @Transform(({ value }) => Number(value))
   @IsInt()
@@ -96,6 +117,9 @@ export function validateEnvironment(raw: Record<string, unknown>): AppConfig {
   const problems = errors.map((error) => `${error.property}: ${Object.values(error.constraints ?? {}).join('; ')}`);
   if (env.NODE_ENV === 'production' && env.JWT_SECRET === new Environment().JWT_SECRET) {
     problems.push('JWT_SECRET: set a secret of your own in production');
+  }
+  if (env.NODE_ENV === 'production' && env.STRIPE_WEBHOOK_SECRET === new Environment().STRIPE_WEBHOOK_SECRET) {
+    problems.push("STRIPE_WEBHOOK_SECRET: set the webhook endpoint's own signing secret in production");
   }
   if (problems.length > 0) {
     throw new Error(`Keenroute's configuration is not valid:\n  ${problems.join('\n  ')}`);

@@ -4,6 +4,14 @@ import { BookingItem } from '../bookings/entities/booking-item.entity';
 import { Booking } from '../bookings/entities/booking.entity';
 import { CustomerStopHistory } from '../customers/entities/customer-stop-history.entity';
 import { Customer } from '../customers/entities/customer.entity';
+import { BusinessProfile } from '../invoices/entities/business-profile.entity';
+import { CreditNote } from '../invoices/entities/credit-note.entity';
+import { InvoiceLine } from '../invoices/entities/invoice-line.entity';
+import { InvoiceMail } from '../invoices/entities/invoice-mail.entity';
+import { InvoiceReminder } from '../invoices/entities/invoice-reminder.entity';
+import { Invoice } from '../invoices/entities/invoice.entity';
+import { InvoiceCheckout } from '../payments/entities/invoice-checkout.entity';
+import { PaymentEvent } from '../payments/entities/payment-event.entity';
 import { CsvImport } from '../imports/entities/csv-import.entity';
 import { CalendarFeed } from '../route-days/entities/calendar-feed.entity';
 import { PlanningSettings } from '../route-days/entities/planning-settings.entity';
@@ -20,7 +28,7 @@ import { Stop } from '../stops/entities/stop.entity';
 import { TicketLineOverride } from '../tickets/entities/ticket-line-override.entity';
 import { TicketLine } from '../tickets/entities/ticket-line.entity';
 import { Ticket } from '../tickets/entities/ticket.entity';
-import { Payment } from '../tickets/payments/payment.entity';
+import { Payment } from '../payments/entities/payment.entity';
 import { User } from '../users/entities/user.entity';
 
 /** Every entity, for the CLI data source; the app registers them through each module's forFeature. */
@@ -49,4 +57,12 @@ export const entities = [
   TicketLine,
   TicketLineOverride,
   Payment,
+  BusinessProfile,
+  Invoice,
+  InvoiceLine,
+  CreditNote,
+  InvoiceReminder,
+  InvoiceMail,
+  InvoiceCheckout,
+  PaymentEvent,
 ];

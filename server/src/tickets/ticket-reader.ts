@@ -15,7 +15,7 @@ import type { TicketDto, TicketLineDto, TicketSummaryDto } from './dto/ticket-re
 import { TicketLine } from './entities/ticket-line.entity';
 import { Ticket } from './entities/ticket.entity';
 import { toPaymentDto } from './payments/dto/payment.dto';
-import { Payment } from './payments/payment.entity';
+import { Payment } from '../payments/entities/payment.entity';
 import { paidCents } from './payments/settlement';
 import { recipeSummary } from './ticket-recipe';
 

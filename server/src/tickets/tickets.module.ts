@@ -7,7 +7,7 @@ import { CheckInService } from './check-in.service';
 import { TicketLineOverride } from './entities/ticket-line-override.entity';
 import { TicketLine } from './entities/ticket-line.entity';
 import { Ticket } from './entities/ticket.entity';
-import { Payment } from './payments/payment.entity';
+import { Payment } from '../payments/entities/payment.entity';
 import { TicketPaymentsService } from './payments/ticket-payments.service';
 import { TicketClosing } from './ticket-closing';
 import { TicketPhotosController } from './ticket-photos.controller';

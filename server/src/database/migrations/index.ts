@@ -5,6 +5,7 @@ import { CreateCsvImports1764806400001 } from './1764806400001-CreateCsvImports'
 import { CreateRouteDays1764892800000 } from './1764892800000-CreateRouteDays';
 import { CreateBookings1764979200000 } from './1764979200000-CreateBookings';
 import { CreateTickets1764979200001 } from './1764979200001-CreateTickets';
+import { CreateInvoices1765065600000 } from './1765065600000-CreateInvoices';
 
 /** Listed explicitly, oldest first, so the CLI, the app and jest load the same migrations without globs. */
 export const migrations = [
@@ -15,4 +16,5 @@ export const migrations = [
   CreateRouteDays1764892800000,
   CreateBookings1764979200000,
   CreateTickets1764979200001,
+  CreateInvoices1765065600000,
 ];

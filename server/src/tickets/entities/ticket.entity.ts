@@ -86,6 +86,10 @@ export class Ticket {
   @Column({ type: 'varchar', length: 16, default: 'unpaid' })
   settlement: Settlement;
 
+  /** The invoice (not void) that bills this ticket; null until one does. */
+  @Column({ name: 'invoice_id', type: 'uuid', nullable: true })
+  invoiceId: string | null;
+
   @Column({ name: 'opened_by', type: 'uuid', nullable: true })
   openedBy: string | null;
 

@@ -1,7 +1,7 @@
 import { formatMoney } from '@keenroute/shared';
 import { DomainError } from '../../common/errors/domain-error';
 import type { Settlement, TicketStatus } from '../entities/ticket.entity';
-import type { PaymentMethod } from './payment.entity';
+import type { ManualPaymentMethod } from '../../payments/entities/payment.entity';
 
 export const paidCents = (payments: readonly { amountCents: number }[]) =>
   payments.reduce((sum, payment) => sum + payment.amountCents, 0);
@@ -21,7 +21,7 @@ export interface PayableTicket {
 export function checkPayment(
   ticket: PayableTicket,
   alreadyPaidCents: number,
-  payment: { method: PaymentMethod; amountCents: number; reference: string },
+  payment: { method: ManualPaymentMethod; amountCents: number; reference: string },
 ): Settlement {
   if (ticket.status === 'open') {
     throw new DomainError('conflict', 'Finish the ticket first: payment is taken once every pair is done.');

@@ -8,7 +8,7 @@ import { Ticket } from '../entities/ticket.entity';
 import { TicketReader } from '../ticket-reader';
 import { TicketWriter } from '../ticket-writer';
 import type { RecordPaymentDto } from './dto/record-payment.dto';
-import { Payment } from './payment.entity';
+import { Payment } from '../../payments/entities/payment.entity';
 import { checkPayment, checkToInvoice, paidCents } from './settlement';
 
 /** Payments taken on site (cash, cheque, card on a terminal) and "leave it for an invoice". */

@@ -1,5 +1,5 @@
 import { ApiProperty } from '@nestjs/swagger';
-import { PAYMENT_METHODS, type Payment, type PaymentMethod } from '../payment.entity';
+import { PAYMENT_METHODS, type Payment, type PaymentMethod } from '../../../payments/entities/payment.entity';
 
 export class PaymentDto {
   @ApiProperty({ format: 'uuid' }) id: string;

@@ -2,12 +2,12 @@ import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
 import { IsIn, IsInt, IsOptional, IsString, Matches, Max, MaxLength, Min } from 'class-validator';
 import { trimmed } from '../../../users/dto/invite-user.dto';
-import { PAYMENT_METHODS, type PaymentMethod } from '../payment.entity';
+import { MANUAL_PAYMENT_METHODS, type ManualPaymentMethod } from '../../../payments/entities/payment.entity';
 
 export class RecordPaymentDto {
-  @ApiProperty({ enum: PAYMENT_METHODS, description: 'Card payments are run on a terminal and recorded here' })
-  @IsIn(PAYMENT_METHODS, { message: 'Choose how it was paid: cash, cheque or card on a terminal.' })
-  method: PaymentMethod;
+  @ApiProperty({ enum: MANUAL_PAYMENT_METHODS, description: 'Card payments are run on a terminal and recorded here' })
+  @IsIn(MANUAL_PAYMENT_METHODS, { message: 'Choose how it was paid: cash, cheque or card on a terminal.' })
+  method: ManualPaymentMethod;
 
   @ApiProperty({ example: 4830, description: 'Integer cents, more than 0; less than the balance is a part payment' })
   @IsInt({ message: 'Enter the amount in whole cents.' })

@@ -1,0 +1,32 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { Payment } from '../payments/entities/payment.entity';
+import { Ticket } from '../tickets/entities/ticket.entity';
+import { TicketLine } from '../tickets/entities/ticket-line.entity';
+import { BusinessProfile } from './entities/business-profile.entity';
+import { CreditNote } from './entities/credit-note.entity';
+import { InvoiceLine } from './entities/invoice-line.entity';
+import { InvoiceMail } from './entities/invoice-mail.entity';
+import { InvoiceReminder } from './entities/invoice-reminder.entity';
+import { Invoice } from './entities/invoice.entity';
+import { InvoicePayLink } from './invoice-pay-link';
+
+/** Invoices made from finished tickets: drafts, numbering, credit notes and voids; the pay link. */
+@Module({
+  imports: [
+    TypeOrmModule.forFeature([
+      Invoice,
+      InvoiceLine,
+      CreditNote,
+      BusinessProfile,
+      InvoiceReminder,
+      InvoiceMail,
+      Payment,
+      Ticket,
+      TicketLine,
+    ]),
+  ],
+  providers: [InvoicePayLink],
+  exports: [InvoicePayLink],
+})
+export class InvoicesModule {}
