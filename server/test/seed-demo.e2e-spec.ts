@@ -71,6 +71,20 @@ describe('demo seed (e2e)', () => {
     expect(secondRun).toBe(false);
   });
 
+  it('fills in the invented business profile for the invoices once, and leaves an owner’s own name alone', async () => {
+    const profile = await one<{ name: string; email: string; payment_terms_days: number }>(
+      `SELECT name, email, payment_terms_days FROM business_profile WHERE id = 1`,
+    );
+    expect(profile).toEqual({
+      name: 'Larkhaven Shear Route (demo)',
+      email: 'billing@demo.keenroute.test',
+      payment_terms_days: 14,
+    });
+    await db.query(`UPDATE business_profile SET name = 'Our own shop' WHERE id = 1`);
+    await seedDemo(db);
+    expect((await one<{ name: string }>(`SELECT name FROM business_profile WHERE id = 1`)).name).toBe('Our own shop');
+  });
+
   it('gives the same registry for the same day every time (seeded, not random)', () => {
     const counter = () => {
       let n = 0;

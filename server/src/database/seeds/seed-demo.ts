@@ -1,6 +1,6 @@
 /**
- * The demo seed: invented users, a demo rate card, planning settings and an invented registry for the demo scenario
- * (Larkhaven).
+ * The demo seed: invented users, a demo rate card, planning settings, the business profile on the invoices and an
+ * invented registry for the demo scenario (Larkhaven).
  */
 import { DEMO_RATE_CARD } from '@keenroute/shared';
 import { hash } from 'bcryptjs';
@@ -8,6 +8,7 @@ import { type DataSource, In } from 'typeorm';
 import { BCRYPT_COST } from '../../auth/jwt.constants';
 import { RateCardVersion } from '../../rates/entities/rate-card-version.entity';
 import { User } from '../../users/entities/user.entity';
+import { seedDemoBusinessProfile } from './demo-business';
 import { seedDemoPlanning } from './demo-planning';
 import { DEMO_PASSWORD, DEMO_USERS } from './demo-users';
 import { registryIsEmpty, seedDemoRegistry } from './seed-registry';
@@ -43,6 +44,7 @@ export async function seedDemo(dataSource: DataSource, options: SeedDemoOptions 
       changed = true;
     }
     if (await seedDemoPlanning(manager)) changed = true;
+    if (await seedDemoBusinessProfile(manager)) changed = true;
     if (await registryIsEmpty(manager)) {
       await seedDemoRegistry(manager, today);
       changed = true;
