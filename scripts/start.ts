@@ -9,13 +9,16 @@ import {
   planDemoWeeks,
   seedDemoData,
 } from './lib/app-setup.js';
-import { appOrigin } from './lib/environment.js';
+import { invoiceDemoTickets } from './lib/demo-invoices.js';
+import { appOrigin, portFromEnv } from './lib/environment.js';
 import { paths, repoRoot, shown } from './lib/paths.js';
 import { ensureDatabase, ensurePostgres, startCluster } from './lib/postgres.js';
 import { assertPortFree, spawnManaged, stopOnSignals, Teardown, waitForHttp } from './lib/processes.js';
+import { throwawayWebhookSecret } from './lib/secrets.js';
 import { describeFailure, SetupError } from './lib/setup-error.js';
 import { startGeocoder } from './stand-ins/geocoder.js';
 import { startMailCatcher } from './stand-ins/mail-catcher.js';
+import { startStripeStandIn } from './stand-ins/stripe.js';
 
 const demoSignIns = [
   ['owner', 'owner@demo.keenroute.test'],
@@ -35,6 +38,8 @@ async function main(): Promise<void> {
   await assertPortFree(smtpPort, "the mail catcher's SMTP side", `MAIL_CATCHER_SMTP_PORT=${smtpPort + 1} npm start`);
   await assertPortFree(outboxPort, "the mail catcher's HTTP API", `MAIL_CATCHER_HTTP_PORT=${outboxPort + 1} npm start`);
   await assertPortFree(geocoderPort, 'the geocoder stand-in', `GEOCODER_PORT=${geocoderPort + 1} npm start`);
+  const paymentsPort = portFromEnv('STRIPE_STAND_IN_PORT', 12111);
+  await assertPortFree(paymentsPort, 'the payment stand-in', `STRIPE_STAND_IN_PORT=${paymentsPort + 1} npm start`);
 
   await ensurePostgres();
   const cluster = await startCluster(devClusterOptions('take-over'));
@@ -51,8 +56,21 @@ async function main(): Promise<void> {
   teardown.add('stop the mail catcher', () => catcher.stop());
   const geocoder = await startGeocoder({ port: geocoderPort, host: '127.0.0.1' });
   teardown.add('stop the geocoder stand-in', () => geocoder.stop());
+  // A new signing secret each start is enough: the stand-in and the app it signs for start and stop together.
+  const webhookSecret = throwawayWebhookSecret();
+  const payments = await startStripeStandIn({
+    port: paymentsPort,
+    host: '127.0.0.1',
+    webhookUrl: `${appOrigin(appPort)}/api/webhooks/stripe`,
+    webhookSecret,
+  });
+  teardown.add('stop the payment stand-in', () => payments.stop());
 
-  const env = devEnvironment(cluster.url(devDatabase));
+  const env = {
+    ...devEnvironment(cluster.url(devDatabase)),
+    STRIPE_API_URL: payments.url,
+    STRIPE_WEBHOOK_SECRET: webhookSecret,
+  };
   await runMigrations(env);
   await seedDemoData(env);
 
@@ -61,6 +79,7 @@ async function main(): Promise<void> {
   const origin = appOrigin(appPort);
   await waitForHttp(`${origin}/api/health`, api, 90_000);
   await planDemoWeeks(origin);
+  await invoiceDemoTickets(origin);
 
   console.log(
     [
@@ -68,13 +87,14 @@ async function main(): Promise<void> {
       `Keenroute is running:  ${origin}`,
       `  Outbox (e-mail caught on this machine): ${catcher.url}/messages  (owners also see it in the app)`,
       `  Geocoder stand-in (knows the invented demo city's addresses): ${geocoder.url}/search?q=...&format=json`,
+      `  Payment stand-in (pretend checkout, no real money): ${payments.url}/__stand-in/events`,
       `  API docs: ${origin}/api/docs`,
       `  Database: ${cluster.url(devDatabase)}  (data in ${shown(cluster.dataDir)}; reset with npm run db:reset)`,
       '',
       '  Demo sign-ins, password keenroute-demo (demo data only: change these before real use):',
       ...demoSignIns.map(([role, email]) => `    ${role.padEnd(23)} ${email}`),
       '',
-      'Press Ctrl-C to stop the API, the mail catcher, the geocoder stand-in and PostgreSQL.',
+      'Press Ctrl-C to stop the API, the mail catcher, the geocoder and payment stand-ins and PostgreSQL.',
       '',
     ].join('\n'),
   );

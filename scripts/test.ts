@@ -6,12 +6,13 @@ import { appEnvironment, appOrigin, portFromEnv } from './lib/environment.js';
 import { paths, repoRoot } from './lib/paths.js';
 import { discardCluster, ensureDatabase, startCluster, type Cluster } from './lib/postgres.js';
 import { freePort, runCommand, spawnManaged, stopOnSignals, Teardown, waitForHttp } from './lib/processes.js';
-import { throwawayJwtSecret } from './lib/secrets.js';
+import { throwawayJwtSecret, throwawayWebhookSecret } from './lib/secrets.js';
 import { SuiteReport } from './lib/suite-report.js';
 import { runScript, type Workspace } from './lib/workspace.js';
 import { startGeocoder, type Geocoder } from './stand-ins/geocoder.js';
 import { startMailCatcher, type MailCatcher } from './stand-ins/mail-catcher.js';
 import { startRouting, type Routing } from './stand-ins/routing.js';
+import { startStripeStandIn, type StripeStandIn } from './stand-ins/stripe.js';
 
 const suiteTimeoutMs = 15 * 60_000;
 const buildTimeoutMs = 5 * 60_000;
@@ -48,7 +49,7 @@ async function startTestCluster(): Promise<Cluster> {
 }
 
 async function main(): Promise<void> {
-  await report.step('suite', 'scripts: mail catcher, geocoder (node:test)', () =>
+  await report.step('suite', 'scripts: stand-ins (node:test)', () =>
     runCommand(
       'scripts',
       path.join(repoRoot, 'node_modules', '.bin', 'tsx'),
@@ -57,6 +58,7 @@ async function main(): Promise<void> {
         'scripts/stand-ins/mail-catcher.test.ts',
         'scripts/stand-ins/geocoder.test.ts',
         'scripts/stand-ins/routing.test.ts',
+        'scripts/stand-ins/stripe.test.ts',
       ],
       {
         cwd: repoRoot,
@@ -81,6 +83,8 @@ async function main(): Promise<void> {
   let catcher: MailCatcher | undefined;
   let geocoder: Geocoder | undefined;
   let routing: Routing | undefined;
+  let payments: StripeStandIn | undefined;
+  const webhookSecret = throwawayWebhookSecret();
   await report.step('setup', 'test PostgreSQL + keenroute_test', async () => {
     cluster = await startTestCluster();
     await ensureDatabase(cluster, 'keenroute_test');
@@ -100,10 +104,16 @@ async function main(): Promise<void> {
     teardown.add('stop the routing stand-in', () => routing?.stop());
     console.log(`Routing stand-in: ${routing.url}`);
   });
+  // The e2e tests post their own signed webhooks, so this one sends none.
+  await report.step('setup', 'payment stand-in', async () => {
+    payments = await startStripeStandIn({ port: 0, host: '127.0.0.1', webhookSecret });
+    teardown.add('stop the payment stand-in', () => payments?.stop());
+    console.log(`Payment stand-in: ${payments.url}`);
+  });
 
   const jwtSecret = throwawayJwtSecret();
   rmSync(paths.testApp, { recursive: true, force: true });
-  const testEnv = (db: string, port: number) =>
+  const testEnv = (db: string, port: number, stripe: StripeStandIn) =>
     appEnvironment({
       mode: 'test',
       port,
@@ -113,15 +123,17 @@ async function main(): Promise<void> {
       mailCatcherUrl: catcher!.url,
       geocoderUrl: geocoder!.url,
       routingUrl: routing!.url,
+      stripeApiUrl: stripe.url,
+      stripeWebhookSecret: webhookSecret,
       dataDir: paths.testApp,
     });
 
   await report.step('suite', 'server unit (jest)', script('server', 'test', unitEnv));
-  if (cluster && catcher && geocoder && routing) {
+  if (cluster && catcher && geocoder && routing && payments) {
     await report.step(
       'suite',
       'server e2e (jest + supertest)',
-      script('server', 'test:e2e', testEnv('keenroute_test', await freePort())),
+      script('server', 'test:e2e', testEnv('keenroute_test', await freePort(), payments)),
     );
   } else {
     report.blocked('server e2e (jest + supertest)', 'the test PostgreSQL or a stand-in did not start');
@@ -138,13 +150,21 @@ async function main(): Promise<void> {
     'build client',
     script('client', 'build', process.env, buildTimeoutMs),
   );
-  if (!(sharedBuilt && serverBuilt && clientBuilt && cluster && catcher && geocoder && routing)) {
+  if (!(sharedBuilt && serverBuilt && clientBuilt && cluster && catcher && geocoder && routing && payments)) {
     report.blocked('browser (playwright-core + Chromium)', 'a build, the test PostgreSQL or a stand-in failed');
     return;
   }
 
   const apiPort = await freePort();
-  const browserEnv = testEnv('keenroute_browser', apiPort);
+  // The browser app's checkout posts its webhooks back to that API, so the API's port is picked first.
+  const browserPayments = await startStripeStandIn({
+    port: 0,
+    host: '127.0.0.1',
+    webhookUrl: `${appOrigin(apiPort)}/api/webhooks/stripe`,
+    webhookSecret,
+  });
+  teardown.add('stop the browser payment stand-in', () => browserPayments.stop());
+  const browserEnv = testEnv('keenroute_browser', apiPort, browserPayments);
   const origin = appOrigin(apiPort);
   let chromium: string | undefined;
   const ready = await report.step('setup', 'browser app: database, API, Chromium', async () => {

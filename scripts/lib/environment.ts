@@ -13,6 +13,9 @@ export interface AppSettings {
   geocoderUrl: string;
   /** A routing service of the `table` form; unset: great-circle estimates. */
   routingUrl?: string;
+  /** The payment stand-in (or unset: the real payment service) and the webhook signing secret it signs with. */
+  stripeApiUrl?: string;
+  stripeWebhookSecret?: string;
   dataDir: string;
 }
 
@@ -33,6 +36,8 @@ export function appEnvironment(settings: AppSettings): NodeJS.ProcessEnv {
     MAIL_CATCHER_URL: settings.mailCatcherUrl,
     GEOCODER_URL: settings.geocoderUrl,
     ...(settings.routingUrl ? { ROUTING_URL: settings.routingUrl } : {}),
+    ...(settings.stripeApiUrl ? { STRIPE_API_URL: settings.stripeApiUrl } : {}),
+    ...(settings.stripeWebhookSecret ? { STRIPE_WEBHOOK_SECRET: settings.stripeWebhookSecret } : {}),
     CLIENT_DIST: paths.clientDist,
     DATA_DIR: settings.dataDir,
     // Tests refuse requests on purpose by the hundred; only real failures (5xx) belong in their output.

@@ -38,3 +38,9 @@ export function developmentJwtSecret(file = paths.secrets): string {
 export function throwawayJwtSecret(): string {
   return randomBytes(48).toString('base64url');
 }
+
+/** A payment webhook signing secret for one run: the stand-in signs with it and the app verifies with it. */
+export function throwawayWebhookSecret(): string {
+  // Hex, because the app accepts only whsec_ followed by letters, digits and _.
+  return `whsec_${randomBytes(24).toString('hex')}`;
+}
