@@ -15,6 +15,8 @@ export const RULE_ERROR_CODES = [
   'invalid-bench-minutes',
   'invalid-rate-card',
   'invalid-ticket',
+  'invalid-invoice',
+  'invalid-date',
   'invalid-cadence',
   'invalid-hours',
   'invalid-time',

@@ -11,3 +11,4 @@ export * from './rates/index.js';
 export * from './registry/index.js';
 export * from './route-days/index.js';
 export * from './bookings/index.js';
+export * from './invoices/index.js';
