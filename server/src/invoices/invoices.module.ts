@@ -9,7 +9,12 @@ import { InvoiceLine } from './entities/invoice-line.entity';
 import { InvoiceMail } from './entities/invoice-mail.entity';
 import { InvoiceReminder } from './entities/invoice-reminder.entity';
 import { Invoice } from './entities/invoice.entity';
+import { InvoiceDrafts } from './invoice-drafts';
+import { InvoiceLists } from './invoice-lists';
 import { InvoicePayLink } from './invoice-pay-link';
+import { InvoiceReader } from './invoice-reader';
+import { InvoicesController } from './invoices.controller';
+import { InvoicesService } from './invoices.service';
 
 /** Invoices made from finished tickets: drafts, numbering, credit notes and voids; the pay link. */
 @Module({
@@ -26,7 +31,8 @@ import { InvoicePayLink } from './invoice-pay-link';
       TicketLine,
     ]),
   ],
-  providers: [InvoicePayLink],
-  exports: [InvoicePayLink],
+  controllers: [InvoicesController],
+  providers: [InvoicePayLink, InvoiceReader, InvoiceLists, InvoiceDrafts, InvoicesService],
+  exports: [InvoicePayLink, InvoiceReader, InvoicesService],
 })
 export class InvoicesModule {}
