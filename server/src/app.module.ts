@@ -18,7 +18,9 @@ import { DevModule } from './dev/dev.module';
 import { GeocodingModule } from './geocoding/geocoding.module';
 import { HealthModule } from './health/health.module';
 import { ImportsModule } from './imports/imports.module';
+import { InvoiceDocumentsModule } from './invoices/documents/invoice-documents.module';
 import { InvoicesModule } from './invoices/invoices.module';
+import { PaymentsModule } from './payments/payments.module';
 import { JobsModule } from './jobs/jobs.module';
 import { MailModule } from './mail/mail.module';
 import { RatesModule } from './rates/rates.module';
@@ -101,6 +103,8 @@ const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
     BookingsModule,
     TicketsModule,
     InvoicesModule,
+    InvoiceDocumentsModule,
+    PaymentsModule,
     // Last: the notices and calendar routes under /route-days/ are literal paths that must match before :id.
     RouteDaysModule,
   ],

@@ -7,7 +7,11 @@ import { configureApp } from './app.setup';
 import type { AppConfig } from './config/environment';
 
 async function bootstrap(): Promise<void> {
-  const app = await NestFactory.create<NestExpressApplication>(AppModule, { bufferLogs: true });
+  const app = await NestFactory.create<NestExpressApplication>(AppModule, {
+    bufferLogs: true,
+    // The JSON parser also keeps the exact bytes (req.rawBody): the payment webhook's signature is over them.
+    rawBody: true,
+  });
   // One proxy hop (a load balancer) may set X-Forwarded-For; rate limits use the client's address.
   app.set('trust proxy', 'loopback');
   configureApp(app);

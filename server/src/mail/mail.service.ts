@@ -4,13 +4,23 @@ import { createTransport, type Transporter } from 'nodemailer';
 import type { Address } from 'nodemailer/lib/mailer';
 import type { AppConfig } from '../config/environment';
 
+export interface MailAttachment {
+  filename: string;
+  content: Buffer;
+  contentType: string;
+}
+
 export interface OutgoingMail {
   /** An address object keeps a person's name out of the header text nodemailer writes. */
   to: string | Address;
   subject: string;
   text: string;
   html?: string;
+  attachments?: MailAttachment[];
 }
+
+/** How one delivery went; the error text is kept so a send log can say why a message did not go. */
+export type DeliveryResult = { ok: true; messageId: string } | { ok: false; error: string };
 
 /** Sends e-mail over SMTP (the local mail catcher in development and tests, a real relay in production). */
 @Injectable()
@@ -32,12 +42,17 @@ export class MailService {
 
   /** nodemailer builds the headers itself, so a name or subject with line breaks cannot inject a header. */
   async send(mail: OutgoingMail): Promise<boolean> {
+    return (await this.deliver(mail)).ok;
+  }
+
+  /** Like send, but says why a message failed (refused recipient, relay down …) instead of only that it did. */
+  async deliver(mail: OutgoingMail): Promise<DeliveryResult> {
     try {
-      await this.transport.sendMail({ from: this.from, ...mail });
-      return true;
+      const info = (await this.transport.sendMail({ from: this.from, ...mail })) as { messageId?: string };
+      return { ok: true, messageId: info.messageId ?? '' };
     } catch (error) {
       this.logger.error({ err: error, to: mail.to, subject: mail.subject }, 'e-mail could not be sent');
-      return false;
+      return { ok: false, error: error instanceof Error ? error.message : String(error) };
     }
   }
 }

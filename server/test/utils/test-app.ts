@@ -16,7 +16,7 @@ let passwordHash: Promise<string> | undefined;
 /** The whole app, configured exactly as main.ts does, against the real test database. */
 export async function createTestApp(): Promise<INestApplication<App>> {
   const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();
-  const app = moduleRef.createNestApplication<INestApplication<App>>({ logger: false });
+  const app = moduleRef.createNestApplication<INestApplication<App>>({ rawBody: true, logger: false });
   configureApp(app);
   await app.init();
   return app;

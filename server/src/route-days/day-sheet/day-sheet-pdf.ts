@@ -1,10 +1,7 @@
 import { EDGE_TYPE_LABELS, formatTimeOfDay, TOOL_KIND_LABELS, WEEKDAY_LABELS } from '@keenroute/shared';
-import PDFDocument from 'pdfkit';
+import { INTER, INTER_BOLD } from '../../common/pdf/fonts';
+import { renderToBuffer } from '../../common/pdf/render-to-buffer';
 import type { DaySheetDto, SheetStopDto } from './day-sheet.dto';
-
-// The same Inter the web app ships; pdfkit embeds the .woff files (it cannot read woff2).
-const INTER_REGULAR = require.resolve('@fontsource/inter/files/inter-latin-400-normal.woff');
-const INTER_BOLD = require.resolve('@fontsource/inter/files/inter-latin-700-normal.woff');
 
 const MARGIN = 48;
 const TEAL = '#1d5c63';
@@ -15,22 +12,18 @@ const time = (minute: number | null) => (minute === null ? '–' : formatTimeOfD
 /** The printable day sheet: a header with the day's totals, then each stop in order, then the bench cautions. */
 export function renderDaySheet(sheet: DaySheetDto): Promise<Buffer> {
   const day = sheet.routeDay;
-  const doc = new PDFDocument({
+  const options: PDFKit.PDFDocumentOptions = {
     size: 'LETTER',
     margin: MARGIN,
     info: { Title: `Day sheet ${day.day} – ${day.sharpener.name}`, Creator: 'Keenroute' },
-  });
-  const chunks: Buffer[] = [];
-  doc.on('data', (chunk: Buffer) => chunks.push(chunk));
-  const finished = new Promise<Buffer>((done, fail) => {
-    doc.on('end', () => done(Buffer.concat(chunks)));
-    doc.on('error', fail);
-  });
-  doc.registerFont('Inter', INTER_REGULAR);
-  doc.registerFont('Inter-Bold', INTER_BOLD);
+  };
+  return renderToBuffer(options, (doc) => drawSheet(doc, sheet));
+}
 
-  doc.font('Inter-Bold').fontSize(18).fillColor(TEAL).text(`Day sheet · ${WEEKDAY_LABELS[day.weekday]} ${day.day}`);
-  doc.font('Inter').fontSize(10).fillColor('#000000');
+function drawSheet(doc: PDFKit.PDFDocument, sheet: DaySheetDto): void {
+  const day = sheet.routeDay;
+  doc.font(INTER_BOLD).fontSize(18).fillColor(TEAL).text(`Day sheet · ${WEEKDAY_LABELS[day.weekday]} ${day.day}`);
+  doc.font(INTER).fontSize(10).fillColor('#000000');
   doc.text(`${day.sharpener.name} · from and back to ${day.start.label}`);
   const t = sheet.totals;
   doc.text(
@@ -42,18 +35,16 @@ export function renderDaySheet(sheet: DaySheetDto): Promise<Buffer> {
   if (sheet.stops.length === 0) doc.text('No stops on this route day.');
   for (const stop of sheet.stops) drawStop(doc, stop);
 
-  doc.moveDown().font('Inter-Bold').fontSize(10).fillColor(TEAL).text('At the bench');
-  doc.font('Inter').fontSize(8).fillColor(GREY);
+  doc.moveDown().font(INTER_BOLD).fontSize(10).fillColor(TEAL).text('At the bench');
+  doc.font(INTER).fontSize(8).fillColor(GREY);
   for (const caution of sheet.cautions) doc.text(`• ${caution}`);
-  doc.end();
-  return finished;
 }
 
 function drawStop(doc: PDFKit.PDFDocument, stop: SheetStopDto): void {
   if (doc.y > doc.page.height - MARGIN - 110) doc.addPage();
-  doc.font('Inter-Bold').fontSize(12).fillColor('#000000');
+  doc.font(INTER_BOLD).fontSize(12).fillColor('#000000');
   doc.text(`${stop.position + 1}. ${stop.name}   ${time(stop.arrivalWindow.from)}–${time(stop.arrivalWindow.to)}`);
-  doc.font('Inter').fontSize(9).fillColor('#000000');
+  doc.font(INTER).fontSize(9).fillColor('#000000');
   doc.text([stop.street, stop.city, stop.postalCode].filter(Boolean).join(', '));
   const contact = [stop.phone, stop.email].filter(Boolean).join(' · ');
   if (contact) doc.text(contact);
