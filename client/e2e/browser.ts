@@ -80,3 +80,23 @@ export async function navLabels(page: Page): Promise<string[]> {
 export async function overflowsHorizontally(page: Page): Promise<boolean> {
   return page.evaluate(() => document.documentElement.scrollWidth > window.innerWidth + 1);
 }
+
+/** Calls the API as a demo user, for the set-up the office or a planner would have done before the journey. */
+export async function api(email: string, password = DEMO_PASSWORD) {
+  const login = await fetch(`${BASE_URL}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email, password }),
+  });
+  if (!login.ok) throw new Error(`Signing in as ${email}: HTTP ${login.status}`);
+  const { accessToken } = (await login.json()) as { accessToken: string };
+  return async <T>(method: string, path: string, body?: unknown): Promise<T> => {
+    const response = await fetch(`${BASE_URL}${path}`, {
+      method,
+      headers: { authorization: `Bearer ${accessToken}`, 'content-type': 'application/json' },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+    if (!response.ok) throw new Error(`${method} ${path}: HTTP ${response.status} ${await response.text()}`);
+    return (response.status === 204 ? undefined : await response.json()) as T;
+  };
+}

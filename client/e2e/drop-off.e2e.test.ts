@@ -2,34 +2,15 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import {
   BASE_URL,
-  DEMO_PASSWORD,
   PHONE,
   launchBrowser,
   overflowsHorizontally,
   screenshot,
   type Browser,
+  api,
 } from './browser';
 
 const MAIL_CATCHER_URL = process.env.MAIL_CATCHER_URL?.replace(/\/$/, '');
-
-/** Calls the API as a demo user, for the set-up a planner would have done before the groomer books. */
-async function api(email: string) {
-  const login = await fetch(`${BASE_URL}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
-  });
-  const { accessToken } = (await login.json()) as { accessToken: string };
-  return async <T>(method: string, path: string, body?: unknown): Promise<T> => {
-    const response = await fetch(`${BASE_URL}${path}`, {
-      method,
-      headers: { authorization: `Bearer ${accessToken}`, 'content-type': 'application/json' },
-      body: body === undefined ? undefined : JSON.stringify(body),
-    });
-    if (!response.ok) throw new Error(`${method} ${path}: HTTP ${response.status} ${await response.text()}`);
-    return (await response.json()) as T;
-  };
-}
 
 function addDays(isoDate: string, days: number): string {
   const date = new Date(`${isoDate}T12:00:00Z`);

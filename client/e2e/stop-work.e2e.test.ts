@@ -2,32 +2,13 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import {
   BASE_URL,
-  DEMO_PASSWORD,
   launchBrowser,
   overflowsHorizontally,
   screenshot,
   signIn,
   type Browser,
+  api,
 } from './browser';
-
-/** Calls the API as a demo user, for the set-up the office would have done before the day. */
-async function api(email: string) {
-  const login = await fetch(`${BASE_URL}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({ email, password: DEMO_PASSWORD }),
-  });
-  const { accessToken } = (await login.json()) as { accessToken: string };
-  return async <T>(method: string, path: string, body?: unknown): Promise<T> => {
-    const response = await fetch(`${BASE_URL}${path}`, {
-      method,
-      headers: { authorization: `Bearer ${accessToken}`, 'content-type': 'application/json' },
-      body: body === undefined ? undefined : JSON.stringify(body),
-    });
-    if (!response.ok) throw new Error(`${method} ${path}: HTTP ${response.status} ${await response.text()}`);
-    return (await response.json()) as T;
-  };
-}
 
 interface Week {
   today: string;

@@ -32,6 +32,14 @@ export const routes: RouteObject[] = [
         }),
       },
       {
+        path: paths.pay.page.path,
+        lazy: async () => ({ Component: (await import('@/features/payments/routes/pay')).PayRoute }),
+      },
+      {
+        path: paths.pay.done.path,
+        lazy: async () => ({ Component: (await import('@/features/payments/routes/pay-done')).PayDoneRoute }),
+      },
+      {
         lazy: async () => ({ Component: (await import('./layout/public-or-app-layout')).PublicOrAppLayout }),
         children: [
           {
@@ -237,12 +245,67 @@ export const routes: RouteObject[] = [
                 ],
               },
               {
+                element: <RequireRole roles={paths.invoices.mine.roles} />,
+                children: [
+                  {
+                    path: paths.invoices.mine.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/payments/routes/my-invoices')).MyInvoicesRoute,
+                    }),
+                  },
+                ],
+              },
+              {
                 element: <RequireRole roles={paths.bookings.list.roles} />,
                 children: [
                   {
                     path: paths.bookings.list.path,
                     lazy: async () => ({
                       Component: (await import('@/features/bookings/routes/drop-offs')).DropOffsRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.invoices.list.roles} />,
+                children: [
+                  {
+                    path: paths.invoices.list.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/invoices/routes/invoices')).InvoicesRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.invoices.create.roles} />,
+                children: [
+                  {
+                    path: paths.invoices.create.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/invoices/routes/new-invoice')).NewInvoiceRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.invoices.detail.roles} />,
+                children: [
+                  {
+                    path: paths.invoices.detail.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/invoices/routes/invoice')).InvoiceRoute,
+                    }),
+                  },
+                ],
+              },
+              {
+                element: <RequireRole roles={paths.businessProfile.roles} />,
+                children: [
+                  {
+                    path: paths.businessProfile.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/invoices/routes/business-profile')).BusinessProfileRoute,
                     }),
                   },
                 ],

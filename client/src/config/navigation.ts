@@ -1,5 +1,6 @@
 import type { Role } from '@keenroute/shared';
 import {
+  IconBuildingBank,
   IconBuildingStore,
   IconCalendarWeek,
   IconRoute,
@@ -8,6 +9,7 @@ import {
   IconCalendarDue,
   IconCalendarPlus,
   IconFileImport,
+  IconFileInvoice,
   IconHome2,
   IconInbox,
   IconScissors,
@@ -105,6 +107,14 @@ export const NAV_ITEMS: readonly NavItem[] = [
       'Shears booked online to be left at a stop for its route day, or mailed in, with the bench time they take.',
   },
   {
+    label: 'Invoices',
+    href: paths.invoices.list.getHref(),
+    icon: IconFileInvoice,
+    roles: paths.invoices.list.roles,
+    summary:
+      'Turn finished tickets into invoices per customer or per stop; send them, record payments, follow overdue.',
+  },
+  {
     label: 'My shears',
     href: paths.shears.mine.getHref(),
     icon: IconScissors,
@@ -117,6 +127,13 @@ export const NAV_ITEMS: readonly NavItem[] = [
     icon: IconCalendarPlus,
     roles: ['client'],
     summary: 'Leave your shears at your stop for its next route day, or mail them in, with an estimate of the price.',
+  },
+  {
+    label: 'My invoices',
+    href: paths.invoices.mine.getHref(),
+    icon: IconFileInvoice,
+    roles: paths.invoices.mine.roles,
+    summary: 'Your invoices: what is owed, the PDF, the payments received, and paying online.',
   },
   {
     label: 'Import',
@@ -147,6 +164,13 @@ export const NAV_ITEMS: readonly NavItem[] = [
     // PRODUCT.md lists Rates under the owner; the office reads them too. Sharpeners reach the page by its address.
     roles: ['owner', 'office'],
     summary: 'The price list per pair, add-ons, trip charge and discounts, with a quote preview; the owner edits it.',
+  },
+  {
+    label: 'Business profile',
+    href: paths.businessProfile.getHref(),
+    icon: IconBuildingBank,
+    roles: paths.businessProfile.roles,
+    summary: 'What every invoice says about the business: name, address, tax ID, logo, payment terms and reminders.',
   },
   {
     label: 'Outbox',

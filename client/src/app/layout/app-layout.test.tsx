@@ -12,10 +12,33 @@ import { AppLayout } from './app-layout';
 // PRODUCT.md's plan, limited to the pages that exist now.
 const REGISTRY = ['Coming due', 'Stops', 'Customers', 'Shears', 'Drop-offs'];
 const EXPECTED_NAV: Record<Role, string[]> = {
-  owner: ['Home', 'Week plan', 'Tickets', ...REGISTRY, 'Import', 'Edge recipes', 'Team', 'Rates', 'Outbox'],
-  office: ['Home', 'Week plan', 'Tickets', ...REGISTRY, 'Import', 'Edge recipes', 'Team', 'Rates'],
+  owner: [
+    'Home',
+    'Week plan',
+    'Tickets',
+    ...REGISTRY,
+    'Invoices',
+    'Import',
+    'Edge recipes',
+    'Team',
+    'Rates',
+    'Business profile',
+    'Outbox',
+  ],
+  office: [
+    'Home',
+    'Week plan',
+    'Tickets',
+    ...REGISTRY,
+    'Invoices',
+    'Import',
+    'Edge recipes',
+    'Team',
+    'Rates',
+    'Business profile',
+  ],
   sharpener: ['Home', 'Today', 'My week', 'Tickets', ...REGISTRY, 'Edge recipes'],
-  client: ['Home', 'My shears', 'Book a drop-off'],
+  client: ['Home', 'My shears', 'Book a drop-off', 'My invoices'],
 };
 
 function renderShell() {

@@ -22,6 +22,9 @@ describe('the home page', () => {
     expect(screen.queryByRole('heading', { name: 'At the bench' })).not.toBeInTheDocument();
     expect(screen.getByRole('link', { name: /^My shears/ })).toHaveAttribute('href', '/my-shears');
     expect(screen.getByText(/Book a drop-off/)).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: /^My invoices/ })).toHaveAttribute('href', '/my-invoices');
+    // Every page PRODUCT.md plans for a client exists, so nothing is listed as on the way.
+    expect(screen.queryByRole('heading', { name: 'On the way' })).not.toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Change your password' })).toHaveAttribute(
       'href',
       '/forgot-password?email=client%40demo.keenroute.test',
@@ -33,5 +36,7 @@ describe('the home page', () => {
     renderWithProviders(<HomeRoute />);
     expect(screen.getByRole('link', { name: /^Team/ })).toHaveAttribute('href', '/team');
     expect(screen.getByRole('link', { name: /^Outbox/ })).toHaveAttribute('href', '/dev/outbox');
+    expect(screen.getByRole('link', { name: /^Invoices/ })).toHaveAttribute('href', '/invoices');
+    expect(screen.getByRole('link', { name: /^Business profile/ })).toHaveAttribute('href', '/settings/business');
   });
 });

@@ -69,24 +69,26 @@ export function HomeRoute() {
 
         {isStaff ? <BenchSafetyCard /> : null}
 
-        <Card withBorder padding="lg" radius="lg" bg="gray.0">
-          <Group gap="sm" mb="sm" wrap="nowrap">
-            <ThemeIcon variant="light" color="gray" size="lg" radius="md">
-              <IconHourglassHigh size={20} aria-hidden="true" />
-            </ThemeIcon>
-            <Title order={2} fz="h3">
-              On the way
-            </Title>
-          </Group>
-          <Text size="sm" c="dimmed" mb="sm">
-            Not here yet; these pages arrive with the next releases of Keenroute.
-          </Text>
-          <List spacing="xs" size="sm">
-            {ROLE_OUTLOOK[user.role].map((line) => (
-              <List.Item key={line}>{line}</List.Item>
-            ))}
-          </List>
-        </Card>
+        {ROLE_OUTLOOK[user.role].length > 0 ? (
+          <Card withBorder padding="lg" radius="lg" bg="gray.0">
+            <Group gap="sm" mb="sm" wrap="nowrap">
+              <ThemeIcon variant="light" color="gray" size="lg" radius="md">
+                <IconHourglassHigh size={20} aria-hidden="true" />
+              </ThemeIcon>
+              <Title order={2} fz="h3">
+                On the way
+              </Title>
+            </Group>
+            <Text size="sm" c="dimmed" mb="sm">
+              Not here yet; these pages arrive with the next releases of Keenroute.
+            </Text>
+            <List spacing="xs" size="sm">
+              {ROLE_OUTLOOK[user.role].map((line) => (
+                <List.Item key={line}>{line}</List.Item>
+              ))}
+            </List>
+          </Card>
+        ) : null}
       </SimpleGrid>
     </Stack>
   );

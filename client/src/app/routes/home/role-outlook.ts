@@ -13,5 +13,6 @@ export const ROLE_OUTLOOK: Record<Role, string[]> = {
     'My week: the route days planned for you',
     'Tickets: shears, edge recipes and payments taken on site',
   ],
-  client: ['My invoices, paid online'],
+  // My shears, Book a drop-off and My invoices are all here now.
+  client: [],
 };
