@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
 import { invoiceLinesFromTicket, type TicketForInvoice } from './invoice-lines.js';
-import { dueDate } from './due-date.js';
 
 const ticket = (overrides: Partial<TicketForInvoice> = {}): TicketForInvoice => ({
   label: 'Ticket 2026-12-03, Pine Street Salon (invented)',
@@ -39,23 +38,17 @@ describe('invoiceLinesFromTicket', () => {
     expect(() => invoiceLinesFromTicket(ticket({ taxRateBp: -5 }))).toThrow(/Tax rate/);
     expect(() => invoiceLinesFromTicket(ticket({ lines: null as never }))).toThrow(/lines/);
     expect(() => invoiceLinesFromTicket(ticket({ subtotalCents: 1.5 }))).toThrow(/whole number/);
-  });
-});
-
-describe('dueDate', () => {
-  it('adds calendar days across month and year ends and leap days', () => {
-    expect(dueDate('2026-12-02', 14)).toBe('2026-12-16');
-    expect(dueDate('2026-12-20', 14)).toBe('2027-01-03');
-    expect(dueDate('2028-02-28', 1)).toBe('2028-02-29');
-    expect(dueDate('2027-02-28', 1)).toBe('2027-03-01');
-    expect(dueDate('2026-01-31', 0)).toBe('2026-01-31');
+    expect(() => invoiceLinesFromTicket(ticket({ subtotalCents: -100 }))).toThrow(/subtotalCents must be between 0/);
+    expect(() => invoiceLinesFromTicket(ticket({ label: ' ' }))).toThrow(/label must be a non-empty text/);
+    expect(() => invoiceLinesFromTicket(ticket({ servicesTaxable: 'yes' as never }))).toThrow(/taxed/);
+    const noId = [{ ticketLineId: undefined as never, description: 'x', amountCents: 1 }];
+    expect(() => invoiceLinesFromTicket(ticket({ lines: noId }))).toThrow(/lines\[0\]\.ticketLineId/);
+    const negative = [{ ticketLineId: 'a', description: 'x', amountCents: -1 }];
+    expect(() => invoiceLinesFromTicket(ticket({ lines: negative }))).toThrow(/lines\[0\]\.amountCents/);
   });
 
-  it('refuses a date that is not one, and terms out of range', () => {
-    expect(() => dueDate('2026-02-30', 1)).toThrow(/YYYY-MM-DD/);
-    expect(() => dueDate('02/12/2026', 1)).toThrow(/YYYY-MM-DD/);
-    expect(() => dueDate(undefined as never, 1)).toThrow(/YYYY-MM-DD/);
-    expect(() => dueDate('2026-12-02', -1)).toThrow(/Payment terms/);
-    expect(() => dueDate('2026-12-02', 1.5)).toThrow(/Payment terms/);
+  it('needs the adjustment label only when there is an adjustment', () => {
+    expect(invoiceLinesFromTicket(ticket({ subtotalCents: 8000, adjustmentLabel: '' }))).toHaveLength(2);
+    expect(() => invoiceLinesFromTicket(ticket({ adjustmentLabel: '' }))).toThrow(/adjustmentLabel/);
   });
 });

@@ -1,4 +1,4 @@
-import { RuleError } from '../errors.js';
+import { RuleError, shown } from '../errors.js';
 import { assertCents, sumCents, validateTaxRateBp, type Cents } from '../money.js';
 
 /** What a finished ticket brings to an invoice: its shear lines at their effective price and its totals. */
@@ -28,28 +28,46 @@ export interface InvoiceLineDraft {
  * (its multi-pair discount, minimum top-up and trip charge), so the lines add up to the ticket's subtotal exactly.
  */
 export function invoiceLinesFromTicket(ticket: TicketForInvoice): InvoiceLineDraft[] {
+  const label = text(ticket?.label, 'label');
   const taxRateBp = validateTaxRateBp(ticket.taxRateBp, 'taxRateBp');
   const subtotal = assertCents(ticket.subtotalCents, 'subtotalCents');
-  if (!Array.isArray(ticket.lines)) throw new RuleError('invalid-invoice', 'A ticket needs its lines.', 'lines');
-  const shearLines = ticket.lines.map((line, index): InvoiceLineDraft => ({
-    kind: 'shear',
-    ticketLineId: line.ticketLineId,
-    description: `${ticket.label}: ${line.description}`,
-    amountCents: assertCents(line.amountCents, `lines[${index}].amountCents`),
-    taxable: ticket.servicesTaxable,
-    taxRateBp,
-  }));
+  if (typeof ticket.servicesTaxable !== 'boolean') {
+    throw new RuleError('invalid-invoice', "Say whether the ticket's services are taxed.", 'servicesTaxable');
+  }
+  const taxable = ticket.servicesTaxable;
+  const untrustedLines: unknown = ticket.lines;
+  if (!Array.isArray(untrustedLines)) throw new RuleError('invalid-invoice', 'A ticket needs its lines.', 'lines');
+  const shearLines = ticket.lines.map((line, index): InvoiceLineDraft => {
+    const at = `lines[${index}]`;
+    return {
+      kind: 'shear',
+      ticketLineId: text(line?.ticketLineId, `${at}.ticketLineId`),
+      description: `${label}: ${text(line.description, `${at}.description`)}`,
+      amountCents: assertCents(line.amountCents, `${at}.amountCents`),
+      taxable,
+      taxRateBp,
+    };
+  });
+  // What the ticket added or took off beyond its shears: its multi-pair discount, minimum top-up and trip charge.
   const adjustment = subtotal - sumCents(shearLines.map((line) => line.amountCents));
   if (adjustment === 0) return shearLines;
+  const adjustmentLabel = text(ticket.adjustmentLabel, 'adjustmentLabel');
   return [
     ...shearLines,
     {
       kind: 'adjustment',
       ticketLineId: null,
-      description: `${ticket.label}: ${ticket.adjustmentLabel}`,
+      description: `${label}: ${adjustmentLabel}`,
       amountCents: adjustment,
-      taxable: ticket.servicesTaxable,
+      taxable,
       taxRateBp,
     },
   ];
+}
+
+function text(value: unknown, field: string): string {
+  if (typeof value !== 'string' || value.trim() === '') {
+    throw new RuleError('invalid-invoice', `${field} must be a non-empty text; got ${shown(value)}.`, field);
+  }
+  return value.trim();
 }

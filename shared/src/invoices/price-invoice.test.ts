@@ -1,10 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { isRuleError } from '../errors.js';
-import { DEMO_RATE_CARD } from '../rates/demo-rate-card.js';
-import { priceTicket } from '../rates/price-ticket.js';
-import { EDGE_TYPES, HANDEDNESS, SHEAR_USES, TOOL_KINDS, type Shear } from '../shears.js';
-import { invoiceLinesFromTicket } from './invoice-lines.js';
+import { MONEY_MAX_CENTS } from '../limits.js';
 import { priceInvoice, spreadCents, type InvoiceLineInput } from './price-invoice.js';
 
 const taxed = (amountCents: number, taxRateBp = 825): InvoiceLineInput => ({ amountCents, taxable: true, taxRateBp });
@@ -45,6 +42,50 @@ describe('priceInvoice', () => {
     expect(price.summary).toContain('not taxed: $9.00');
   });
 
+  it('spreads an amount discount over two tax groups by largest remainder (worked example)', () => {
+    // 100.00 at 5 % and 50.00 at 8 %, 10.00 off. Exact shares 6.666… and 3.333…; rounded down 6.66 + 3.33 = 9.99, the
+    // cent left goes to the larger remainder (0.67 > 0.33 of a cent): 6.67 and 3.33.
+    // Tax: 93.33 × 5 % = 4.6665 → 4.67; 46.67 × 8 % = 3.7336 → 3.73. Total 140.00 + 8.40 = 148.40.
+    const price = priceInvoice([taxed(10000, 500), taxed(5000, 800)], { discountCents: 1000 });
+    expect(price.taxGroups).toEqual([
+      { taxRateBp: 500, taxableCents: 9333, taxCents: 467 },
+      { taxRateBp: 800, taxableCents: 4667, taxCents: 373 },
+    ]);
+    expect(price).toMatchObject({ discountCents: 1000, subtotalCents: 14000, taxCents: 840, totalCents: 14840 });
+    expect(price.summary).toEqual([
+      'discount on $150.00 = −$10.00',
+      'tax 5% on $93.33 = $4.67',
+      'tax 8% on $46.67 = $3.73',
+    ]);
+  });
+
+  it('spreads a share discount over two tax groups by largest remainder (worked example)', () => {
+    // 19.99 at 6 % and 10.00 at 8.25 % = 29.99; 10 % of it is 2.999 → 3.00 (half-up). Exact shares 1.99966… and
+    // 1.00033…; rounded down 1.99 + 1.00, the cent left to the larger remainder: 2.00 and 1.00.
+    // Tax: 17.99 × 6 % = 1.0794 → 1.08; 9.00 × 8.25 % = 0.7425 → 0.74. Total 26.99 + 1.82 = 28.81.
+    const price = priceInvoice([taxed(1999, 600), taxed(1000, 825)], { discountBp: 1000 });
+    expect(price.taxGroups).toEqual([
+      { taxRateBp: 600, taxableCents: 1799, taxCents: 108 },
+      { taxRateBp: 825, taxableCents: 900, taxCents: 74 },
+    ]);
+    expect(price).toMatchObject({ discountCents: 300, subtotalCents: 2699, taxCents: 182, totalCents: 2881 });
+  });
+
+  it('groups lines by rate, lowest rate first, whatever order they come in', () => {
+    const price = priceInvoice([taxed(1000, 825), taxed(500, 0), taxed(2000, 825)], null);
+    expect(price.taxGroups.map((group) => [group.taxRateBp, group.taxableCents])).toEqual([
+      [0, 500],
+      [825, 3000],
+    ]);
+  });
+
+  it('reads an empty discount field as no discount, and prices in the currency given', () => {
+    expect(priceInvoice([taxed(1000)], { discountBp: undefined, discountCents: 250 }).discountCents).toBe(250);
+    expect(priceInvoice([taxed(1000)], { discountBp: null } as never).discountCents).toBe(0);
+    expect(priceInvoice([taxed(1000)], { discountBp: 0 }).summary).toEqual(['tax 8.25% on $10.00 = $0.83']);
+    expect(priceInvoice([taxed(1000)], null, 'EUR').summary).toEqual(['tax 8.25% on €10.00 = €0.83']);
+  });
+
   it('counts a ticket discount line (negative) in its group', () => {
     const price = priceInvoice([taxed(5000), taxed(-500)], null);
     expect(price.taxGroups[0]).toEqual({ taxRateBp: 825, taxableCents: 4500, taxCents: 371 });
@@ -67,6 +108,31 @@ describe('priceInvoice', () => {
     expect(refused(() => priceInvoice([taxed(100, -1)], null))).toBe('lines[0].taxRateBp');
     expect(refused(() => priceInvoice([{ amountCents: 1, taxable: 'yes' } as never], null))).toBe('lines[0].taxable');
     expect(refused(() => priceInvoice([taxed(100), taxed(-200)], null))).toBe('lines');
+    expect(refused(() => priceInvoice([taxed(100)], { discountCents: -1 }))).toBe('discountCents');
+    expect(refused(() => priceInvoice([taxed(100)], { discountBp: -1 }))).toBe('discountBp');
+    expect(refused(() => priceInvoice([taxed(100)], { discountBp: 12.5 }))).toBe('discountBp');
+    expect(refused(() => priceInvoice([taxed(100)], null, 'usd'))).toBe('currency');
+    expect(refused(() => priceInvoice(null as never, null))).toBe('lines');
+    expect(
+      refused(() =>
+        priceInvoice(
+          Array.from({ length: 1001 }, () => taxed(1)),
+          null,
+        ),
+      ),
+    ).toBe('lines');
+    expect(refused(() => priceInvoice([null as never], null))).toBe('lines[0].amountCents');
+    expect(refused(() => priceInvoice([taxed(MONEY_MAX_CENTS), taxed(1)], null))).toBe('lines');
+  });
+
+  it('refuses a tax group that adds up to less than zero even when the invoice as a whole does not', () => {
+    // A discount line at 8.25 % with no 8.25 % lines to take off from would make negative tax.
+    expect(() => priceInvoice([taxed(5000, 500), taxed(-200, 825)], null)).toThrow(
+      'The lines taxed at 8.25% add up to less than zero (-$2.00)',
+    );
+    expect(() => priceInvoice([taxed(5000), { amountCents: -1, taxable: false, taxRateBp: 0 }], null)).toThrow(
+      /not taxed add up to less than zero/,
+    );
   });
 });
 
@@ -79,7 +145,10 @@ describe('spreadCents', () => {
         (total, weights) => {
           const whole = weights.reduce((a, b) => a + b, 0);
           const shares = spreadCents(total, weights);
-          if (whole === 0) return expect(shares.every((share) => share === 0)).toBe(true);
+          if (whole === 0) {
+            expect(shares.every((share) => share === 0)).toBe(true);
+            return;
+          }
           expect(shares.reduce((a, b) => a + b, 0)).toBe(total);
           const quota = weights.map((weight) => (total * weight) / whole);
           shares.forEach((share, i) => expect([Math.floor(quota[i]!), Math.ceil(quota[i]!)]).toContain(share));
@@ -98,49 +167,16 @@ describe('spreadCents', () => {
   it('splits 1.00 over three equal weights as 34, 33, 33 (ties to the earlier weight)', () => {
     expect(spreadCents(100, [1, 1, 1])).toEqual([34, 33, 33]);
   });
-});
 
-const shearArb: fc.Arbitrary<Shear> = fc.record({
-  edgeType: fc.constantFrom(...EDGE_TYPES),
-  toolKind: fc.constantFrom(...TOOL_KINDS),
-  lengthIn: fc.integer({ min: 16, max: 36 }).map((quarters) => quarters / 4),
-  handedness: fc.constantFrom(...HANDEDNESS),
-  use: fc.constantFrom(...SHEAR_USES),
-});
+  it('stays exact when total × weight passes 2^53', () => {
+    // Quotas 999 999 996.000000003 and 2.999999997: floors 999 999 996 + 2, the cent left to the second.
+    expect(spreadCents(999_999_999, [999_999_997, 3])).toEqual([999_999_996, 3]);
+  });
 
-describe('an invoice of one ticket', () => {
-  it('totals what priceTicket totals, to the cent, with the ticket discount, minimum and trip charge on one line', () => {
-    fc.assert(
-      fc.property(
-        fc.array(shearArb, { minLength: 1, maxLength: 8 }),
-        fc.integer({ min: 0, max: 1500 }),
-        fc.boolean(),
-        fc.boolean(),
-        (shears, taxRateBp, chargeTrip, servicesTaxable) => {
-          const card = { ...DEMO_RATE_CARD, servicesTaxable };
-          const ticket = priceTicket(
-            shears.map((shear) => ({ shear })),
-            card,
-            { taxRateBp, chargeTrip },
-          );
-          const lines = invoiceLinesFromTicket({
-            label: 'Ticket (generated)',
-            lines: ticket.lines.map((line, index) => ({
-              ticketLineId: `line-${index}`,
-              description: line.explanation,
-              amountCents: line.totalCents,
-            })),
-            subtotalCents: ticket.subtotalCents,
-            taxRateBp,
-            servicesTaxable,
-            adjustmentLabel: ticket.summary.slice(0, -1).join('; '),
-          });
-          const invoice = priceInvoice(lines, null);
-          expect(invoice.subtotalCents).toBe(ticket.subtotalCents);
-          expect(invoice.taxCents).toBe(ticket.taxCents);
-          expect(invoice.totalCents).toBe(ticket.totalCents);
-        },
-      ),
-    );
+  it('gives nothing to spread over weights of zero, and refuses negative or fractional input', () => {
+    expect(spreadCents(500, [0, 0])).toEqual([0, 0]);
+    expect(() => spreadCents(-1, [1])).toThrow(/zero or more/);
+    expect(() => spreadCents(1, [1, -1])).toThrow(/zero or more/);
+    expect(() => spreadCents(1.5, [1])).toThrow(/zero or more/);
   });
 });

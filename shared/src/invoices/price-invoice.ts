@@ -1,4 +1,4 @@
-import { RuleError } from '../errors.js';
+import { RuleError, shown } from '../errors.js';
 import {
   BASIS_POINTS_PER_WHOLE,
   DEFAULT_CURRENCY,
@@ -9,6 +9,7 @@ import {
   formatMoney,
   sumCents,
   taxCents,
+  validateCurrency,
   validateTaxRateBp,
   type Cents,
 } from '../money.js';
@@ -59,27 +60,36 @@ function checkLines(lines: readonly InvoiceLineInput[]): InvoiceLineInput[] {
   });
 }
 
+/** A key left undefined or null counts as not given, so a form's empty field does not read as "both kinds". */
+const given = (value: unknown) => value !== undefined && value !== null;
+
 function discountOf(discount: InvoiceDiscountInput, linesCents: Cents): Cents {
   if (discount === null || discount === undefined) return 0;
-  const hasBp = 'discountBp' in discount;
-  const hasCents = 'discountCents' in discount;
+  const raw = discount as { discountBp?: unknown; discountCents?: unknown };
+  const hasBp = given(raw.discountBp);
+  const hasCents = given(raw.discountCents);
   if (hasBp && hasCents) {
     throw new RuleError('invalid-invoice', 'Give the discount as a share or as an amount, not both.', 'discount');
   }
   if (hasBp) {
-    const bp = discount.discountBp;
-    if (!Number.isSafeInteger(bp) || bp < 0 || bp > BASIS_POINTS_PER_WHOLE) {
+    const bp = raw.discountBp;
+    if (!Number.isSafeInteger(bp) || (bp as number) < 0 || (bp as number) > BASIS_POINTS_PER_WHOLE) {
       throw new RuleError(
         'invalid-invoice',
-        `A discount share is whole basis points from 0 to 10000 (1000 means 10 %); got ${String(bp)}.`,
+        `A discount share is whole basis points from 0 to 10000 (1000 means 10 %); got ${shown(bp)}.`,
         'discountBp',
       );
     }
-    return applyBasisPoints(Math.max(0, linesCents), bp);
+    return applyBasisPoints(linesCents, bp as number);
   }
-  const cents = assertCents((discount as { discountCents: unknown }).discountCents, 'discountCents');
-  if (cents > Math.max(0, linesCents)) {
-    throw new RuleError('invalid-invoice', 'The discount cannot be more than the lines add up to.', 'discountCents');
+  if (!hasCents) return 0;
+  const cents = assertCents(raw.discountCents, 'discountCents');
+  if (cents > linesCents) {
+    throw new RuleError(
+      'invalid-invoice',
+      `The discount (${cents} cents) cannot be more than the lines add up to (${linesCents} cents).`,
+      'discountCents',
+    );
   }
   return cents;
 }
@@ -90,15 +100,26 @@ function discountOf(discount: InvoiceDiscountInput, linesCents: Cents): Cents {
  */
 export function spreadCents(total: Cents, weights: readonly Cents[]): Cents[] {
   const whole = sumCents(weights);
-  if (whole <= 0 || total === 0) return weights.map(() => 0);
+  if (
+    !Number.isSafeInteger(total) ||
+    total < 0 ||
+    weights.some((weight) => !Number.isSafeInteger(weight) || weight < 0)
+  ) {
+    throw new RuleError(
+      'invalid-money',
+      'Only whole cents of zero or more can be spread over weights of zero or more.',
+    );
+  }
+  if (whole === 0 || total === 0) return weights.map(() => 0);
+  // total × weight can pass 2^53 for large invoices, so the quotas are worked in BigInt to stay exact.
   const shares = weights.map((weight) => {
-    const exact = total * weight;
-    return { floor: Math.floor(exact / whole), remainder: exact % whole };
+    const exact = BigInt(total) * BigInt(weight);
+    return { floor: Number(exact / BigInt(whole)), remainder: exact % BigInt(whole) };
   });
   let left = total - sumCents(shares.map((share) => share.floor));
   const order = shares
     .map((share, index) => ({ index, remainder: share.remainder }))
-    .sort((a, b) => b.remainder - a.remainder || a.index - b.index);
+    .sort((a, b) => (a.remainder === b.remainder ? a.index - b.index : a.remainder > b.remainder ? -1 : 1));
   const result = shares.map((share) => share.floor);
   for (const { index } of order) {
     if (left <= 0) break;
@@ -118,33 +139,60 @@ export function priceInvoice(
   discount: InvoiceDiscountInput,
   currency: string = DEFAULT_CURRENCY,
 ): InvoicePrice {
+  validateCurrency(currency);
   const checked = checkLines(lines);
   const money = (cents: Cents) => formatMoney(cents, currency, DEFAULT_LOCALE);
   const linesCents = sumCents(checked.map((line) => line.amountCents));
-  if (linesCents < 0) {
-    throw new RuleError('invalid-invoice', 'The lines of an invoice cannot add up to less than zero.', 'lines');
+  if (linesCents < 0 || linesCents > MONEY_MAX_CENTS) {
+    throw new RuleError(
+      'invalid-invoice',
+      `The lines of an invoice must add up to 0 to ${MONEY_MAX_CENTS} cents; they add up to ${linesCents}.`,
+      'lines',
+    );
   }
   const discountCents = discountOf(discount, linesCents);
   const subtotalCents = linesCents - discountCents;
   const summary: string[] = [];
   if (discountCents > 0) {
-    const share =
-      discount && 'discountBp' in discount ? `${formatBasisPoints(discount.discountBp)} off ` : 'discount on ';
+    const bp = (discount as { discountBp?: unknown } | null)?.discountBp;
+    const share = typeof bp === 'number' ? `${formatBasisPoints(bp)} off ` : 'discount on ';
     summary.push(`${share}${money(linesCents)} = −${money(discountCents)}`);
   }
 
-  // The discount comes off every line in proportion, so each tax group bears its share of it.
+  // Lines grouped by how they are taxed: one group per rate of the taxable lines (lowest first), then the untaxed.
   const rates = [...new Set(checked.filter((line) => line.taxable).map((line) => line.taxRateBp))].sort(
     (a, b) => a - b,
   );
-  const groupLines = rates.map((rate) =>
-    sumCents(checked.filter((line) => line.taxable && line.taxRateBp === rate).map((line) => line.amountCents)),
+  const groups = [
+    ...rates.map((rate) => ({ label: `taxed at ${formatBasisPoints(rate)}`, taxRateBp: rate })),
+    { label: 'not taxed', taxRateBp: null },
+  ].map((group) => ({
+    ...group,
+    cents: sumCents(
+      checked
+        .filter((line) =>
+          group.taxRateBp === null ? !line.taxable : line.taxable && line.taxRateBp === group.taxRateBp,
+        )
+        .map((line) => line.amountCents),
+    ),
+  }));
+  // A ticket's discount line is negative but never outweighs its own ticket, so a group below zero is a mistake.
+  for (const group of groups) {
+    if (group.cents < 0) {
+      throw new RuleError(
+        'invalid-invoice',
+        `The lines ${group.label} add up to less than zero (${money(group.cents)}); a discount line needs the lines it takes off from.`,
+        'lines',
+      );
+    }
+  }
+  // The invoice discount comes off every group in proportion, so each tax group bears its share of it.
+  const discountShares = spreadCents(
+    discountCents,
+    groups.map((group) => group.cents),
   );
-  const untaxed = sumCents(checked.filter((line) => !line.taxable).map((line) => line.amountCents));
-  const weights = [...groupLines, untaxed].map((cents) => Math.max(0, cents));
-  const discountShares = spreadCents(discountCents, weights);
-  const taxGroups = rates.map((taxRateBp, index) => {
-    const taxableCents = Math.max(0, groupLines[index]! - discountShares[index]!);
+  const taxGroups = rates.map((taxRateBp, index): InvoiceTaxGroup => {
+    const taxableCents = groups[index]!.cents - discountShares[index]!;
     return { taxRateBp, taxableCents, taxCents: taxCents(taxableCents, taxRateBp) };
   });
   for (const group of taxGroups) {
@@ -152,7 +200,8 @@ export function priceInvoice(
       `tax ${formatBasisPoints(group.taxRateBp)} on ${money(group.taxableCents)} = ${money(group.taxCents)}`,
     );
   }
-  if (untaxed !== 0) summary.push(`not taxed: ${money(untaxed - discountShares[rates.length]!)}`);
+  const untaxedCents = groups.at(-1)!.cents - discountShares.at(-1)!;
+  if (untaxedCents !== 0) summary.push(`not taxed: ${money(untaxedCents)}`);
   const tax = sumCents(taxGroups.map((group) => group.taxCents));
   return {
     linesCents,
