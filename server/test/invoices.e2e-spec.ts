@@ -64,7 +64,11 @@ describe('invoices (e2e)', () => {
   const rulesLines = async (ticket: TicketDto, taxRateBp: number) =>
     invoiceLinesFromTicket({
       label: 'check',
-      lines: ticket.lines.map((line) => ({ ticketLineId: line.id, description: '', amountCents: line.effectiveCents })),
+      lines: ticket.lines.map((line) => ({
+        ticketLineId: line.id,
+        description: line.shear.tagCode,
+        amountCents: line.effectiveCents,
+      })),
       subtotalCents: ticket.price.subtotalCents,
       taxRateBp,
       servicesTaxable: (await cardOf(ticket)).servicesTaxable,
