@@ -12,6 +12,7 @@ interface StopRow {
 interface CustomerRow {
   id: string;
   name: string;
+  stop: { id: string } | null;
 }
 interface ShearRow {
   id: string;
@@ -22,6 +23,7 @@ interface TicketRow {
   lines: { id: string }[];
 }
 interface ReadyGroup {
+  customerId: string | null;
   tickets: { id: string }[];
 }
 interface InvoiceRow {
@@ -53,9 +55,9 @@ async function signIn(origin: string, email: string) {
 }
 
 /**
- * The demo's billing: the office works a few of today's shears as walk-in visits (up to three pairs per customer), leaves
- * them for an invoice, and makes invoices of some: one left as a draft, one sent by e-mail, one part-paid in cash, one
- * paid by cheque. The rest stay under "New invoice". Through the API, as the office would; skipped once any invoice
+ * The demo's billing: the office works a few of today's shears as visits (up to three pairs per customer), leaves
+ * them for an invoice, and makes invoices of some: one left as a draft, one part-paid in cash, one paid by cheque, and
+ * the demo groomer's sent by e-mail. The rest stay under "New invoice". Through the API, as the office would; skipped once any invoice
  * exists. Everything here is the invented Larkhaven scenario.
  */
 export async function invoiceDemoTickets(origin: string): Promise<void> {
@@ -73,13 +75,18 @@ export async function invoiceDemoTickets(origin: string): Promise<void> {
     const customers = (await call<Page<CustomerRow>>('GET', `/customers?stopId=${stop.id}&pageSize=3`)).items;
     for (const customer of customers) await workTicket(call, stop.id, customer.id);
   }
+  // The demo groomer's own record, so client@demo.keenroute.test has an invoice to open and pay under My invoices.
+  const [jo] = (await call<Page<CustomerRow>>('GET', '/customers?q=Jo%20Marlow&pageSize=1')).items;
+  if (jo?.stop) await workTicket(call, jo.stop.id, jo.id);
 
   const groups = await call<ReadyGroup[]>('GET', '/invoices/ready');
+  const joGroup = groups.find((group) => group.customerId === jo?.id);
+  const others = groups.filter((group) => group !== joGroup);
   const invoices: InvoiceRow[] = [];
-  for (const group of groups.slice(0, 4)) {
+  for (const group of [...others.slice(0, 3), ...(joGroup ? [joGroup] : others.slice(3, 4))]) {
     invoices.push(await call<InvoiceRow>('POST', '/invoices', { ticketIds: group.tickets.map((ticket) => ticket.id) }));
   }
-  const [, toSend, partPaid, paid] = invoices;
+  const [, partPaid, paid, toSend] = invoices;
   if (toSend) await call('POST', `/invoices/${toSend.id}/send`, {});
   if (partPaid) {
     const issued = await call<InvoiceRow>('POST', `/invoices/${partPaid.id}/issue`);

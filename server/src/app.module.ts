@@ -20,6 +20,9 @@ import { HealthModule } from './health/health.module';
 import { ImportsModule } from './imports/imports.module';
 import { InvoiceDocumentsModule } from './invoices/documents/invoice-documents.module';
 import { InvoicesModule } from './invoices/invoices.module';
+import { InvoiceExportModule } from './invoices/export/invoice-export.module';
+import { InvoiceRemindersModule } from './invoices/reminders/invoice-reminders.module';
+import { StatementsModule } from './invoices/statements/statements.module';
 import { PaymentsModule } from './payments/payments.module';
 import { JobsModule } from './jobs/jobs.module';
 import { MailModule } from './mail/mail.module';
@@ -102,7 +105,11 @@ const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
     CalendarModule,
     BookingsModule,
     TicketsModule,
+    // Before InvoicesModule: GET invoices/export.csv is a literal path that must match before invoices/:id.
+    InvoiceExportModule,
     InvoicesModule,
+    InvoiceRemindersModule,
+    StatementsModule,
     InvoiceDocumentsModule,
     PaymentsModule,
     // Last: the notices and calendar routes under /route-days/ are literal paths that must match before :id.
