@@ -1,14 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import {
-  BASE_URL,
-  PHONE,
-  launchBrowser,
-  overflowsHorizontally,
-  screenshot,
-  type Browser,
-  api,
-} from './browser';
+import { BASE_URL, PHONE, launchBrowser, overflowsHorizontally, screenshot, type Browser, api } from './browser';
 
 const MAIL_CATCHER_URL = process.env.MAIL_CATCHER_URL?.replace(/\/$/, '');
 

@@ -1,14 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import {
-  BASE_URL,
-  launchBrowser,
-  overflowsHorizontally,
-  screenshot,
-  signIn,
-  type Browser,
-  api,
-} from './browser';
+import { BASE_URL, launchBrowser, overflowsHorizontally, screenshot, signIn, type Browser, api } from './browser';
 
 interface Week {
   today: string;

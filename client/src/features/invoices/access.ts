@@ -9,3 +9,8 @@ export function canManageInvoices(role: Role): boolean {
 export function canRecordPayment(role: Role): boolean {
   return role === 'owner' || role === 'office' || role === 'sharpener';
 }
+
+/** A statement of account: the office for anyone, a client for their own customer record (the server checks whose). */
+export function canGetCustomerStatement(role: Role): boolean {
+  return role === 'owner' || role === 'office' || role === 'client';
+}

@@ -5,6 +5,8 @@ import { useParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { PageLoader } from '@/components/page-loader';
 import { paths } from '@/config/paths';
+import { canGetCustomerStatement } from '@/features/invoices/access';
+import { StatementButton } from '@/features/invoices/components/statement-button';
 import { usePrintLabels } from '@/features/shears/api/print-labels';
 import { useSignedInUser } from '@/lib/session';
 import { canManageCustomers, canOpenStops } from '../access';
@@ -37,6 +39,9 @@ export function CustomerDetailRoute() {
   }
 
   const record = customer.data;
+  const statement = canGetCustomerStatement(role) ? (
+    <StatementButton subject={{ kind: 'customer', id: record.id, name: record.name }} />
+  ) : null;
   return (
     <Stack gap="lg" maw={1200}>
       <PageHeader
@@ -62,8 +67,11 @@ export function CustomerDetailRoute() {
               >
                 Print tag labels
               </Button>
+              {statement}
             </Group>
-          ) : null
+          ) : (
+            statement
+          )
         }
       />
       <CustomerBadges customer={record} />

@@ -3,13 +3,7 @@ import { IconFileSpreadsheet } from '@tabler/icons-react';
 import { useState } from 'react';
 import { todayIso } from '@/features/stops/format';
 import { useCsvExport, type CsvExportKind } from '../api/export-csv';
-
-/** Why the range cannot be exported, in words; null when it can. */
-export function rangeProblem(from: string, to: string): string | null {
-  if (!from || !to) return 'Choose both dates.';
-  if (from > to) return 'The first day must come before the last.';
-  return null;
-}
+import { rangeProblem } from '../date-range';
 
 /** The invoices or the payments of a period as CSV files for the books; fetched with the sign-in, then saved. */
 export function ExportModal({ opened, onClose }: { opened: boolean; onClose: () => void }) {

@@ -140,4 +140,25 @@ describe('the invoices list', { timeout: 30_000 }, () => {
       'Bearer token-office',
     );
   });
+
+  it('sends the due reminders now, says what happened and fetches the list again', async () => {
+    const server = mockApi({
+      'GET /api/invoices': { status: 200, body: { items: rows, total: 2, page: 1, pageSize: 25 } },
+      'POST /api/invoices/reminders/run': {
+        status: 200,
+        body: { today: '2026-03-31', queued: 2, sent: 2, skipped: 1, cancelled: 0, failed: 0 },
+      },
+    });
+    const { user } = renderList();
+    await screen.findByRole('table', { name: 'Invoices' });
+    const listFetches = server.callsTo('GET', '/api/invoices').length;
+
+    await user.click(screen.getByRole('button', { name: 'Send due reminders' }));
+    expect(
+      await screen.findByText('Reminders: 2 sent, 1 skipped (a later stage was due), 0 stopped (paid or void)'),
+    ).toBeInTheDocument();
+    const [run] = server.callsTo('POST', '/api/invoices/reminders/run');
+    expect(run?.headers.get('Authorization')).toBe('Bearer token-office');
+    await waitFor(() => expect(server.callsTo('GET', '/api/invoices').length).toBeGreaterThan(listFetches));
+  });
 });

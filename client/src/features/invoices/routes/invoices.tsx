@@ -10,6 +10,7 @@ import { useInvoices } from '../api/get-invoices';
 import { ExportModal } from '../components/export-modal';
 import { InvoiceFilters } from '../components/invoice-filters';
 import { InvoiceCards, InvoiceTable } from '../components/invoice-list';
+import { SendRemindersButton } from '../components/send-reminders-button';
 import { INVOICE_PAGE_SIZE, toInvoiceQuery, useInvoiceSearch } from '../hooks/use-invoice-search';
 
 /** Every invoice, newest first: drafts to issue, what is owed and overdue, what is paid or void. */
@@ -34,6 +35,7 @@ export function InvoicesRoute() {
             <Button variant="default" leftSection={<IconFileSpreadsheet size={18} />} onClick={exportModal.open}>
               Export CSV
             </Button>
+            <SendRemindersButton />
             <Button
               component={Link}
               to={paths.businessProfile.getHref()}

@@ -1,6 +1,7 @@
-import { SimpleGrid, Stack } from '@mantine/core';
+import { Group, SimpleGrid, Stack } from '@mantine/core';
 import { useParams } from 'react-router-dom';
 import { PageLoader } from '@/components/page-loader';
+import { StatementButton } from '@/features/invoices/components/statement-button';
 import { useSignedInUser } from '@/lib/session';
 import { canEditAccessNotes, canManageStops } from '../access';
 import { useStop } from '../api/get-stop';
@@ -23,6 +24,11 @@ export function StopDetailRoute() {
   return (
     <Stack gap="md" maw={1200}>
       <StopHeader stop={stop.data} canEdit={canManage} />
+      {canManage ? (
+        <Group>
+          <StatementButton subject={{ kind: 'stop', id: stop.data.id, name: stop.data.name }} />
+        </Group>
+      ) : null}
       <SimpleGrid cols={{ base: 1, md: 2 }} spacing="md">
         <HoursCard stop={stop.data} />
         <AccessNotesCard stop={stop.data} canEdit={canEditAccessNotes(actor.role)} />
