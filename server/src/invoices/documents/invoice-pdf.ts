@@ -1,17 +1,14 @@
 import { formatMoney } from '@keenroute/shared';
 import { INTER, INTER_BOLD } from '../../common/pdf/fonts';
+import { COLOURS, CONTENT_WIDTH, PAGE, drawAddressee, drawLetterhead } from '../../common/pdf/letterhead';
 import { renderToBuffer } from '../../common/pdf/render-to-buffer';
 import type { PaymentMethod } from '../../payments/entities/payment.entity';
 import type { InvoiceDocument } from './invoice-document';
 
-const MARGIN = 48;
-const PAGE_WIDTH = 612; // US Letter, points
-const CONTENT_WIDTH = PAGE_WIDTH - 2 * MARGIN;
+const MARGIN = PAGE.margin;
 const AMOUNT_WIDTH = 90;
 const TAX_WIDTH = 70;
-const TEAL = '#1d5c63';
-const GREY = '#555555';
-const INK = '#000000';
+const { teal: TEAL, grey: GREY, ink: INK } = COLOURS;
 const QR_SIZE = 96;
 
 const METHOD_LABELS: Readonly<Record<PaymentMethod, string>> = {
@@ -57,7 +54,7 @@ export function renderInvoicePdf(document: InvoiceDocument, payQr: Buffer | null
     info: { Title: `${invoiceTitle(invoice)} – ${profile.name || 'Keenroute'}`, Creator: 'Keenroute' },
   };
   return renderToBuffer(options, (doc) => {
-    drawHeader(doc, document);
+    drawLetterhead(doc, profile, document.logo);
     drawParties(doc, document);
     drawLines(doc, document);
     drawTotals(doc, document);
@@ -75,81 +72,21 @@ function room(doc: PDFKit.PDFDocument, height: number): void {
   if (doc.y + height > doc.page.height - MARGIN) doc.addPage();
 }
 
-function drawHeader(doc: PDFKit.PDFDocument, { profile, logo }: InvoiceDocument): void {
-  const top = MARGIN;
-  let logoBottom = top;
-  if (logo) {
-    try {
-      doc.image(logo, MARGIN, top, { fit: [160, 64] });
-      logoBottom = top + 64;
-    } catch {
-      // A logo file that pdfkit cannot read leaves the header text-only rather than failing the invoice.
-    }
-  }
-  const blockX = MARGIN + CONTENT_WIDTH / 2;
-  const blockWidth = CONTENT_WIDTH / 2;
-  doc.font(INTER_BOLD).fontSize(12).fillColor(INK);
-  doc.text(profile.name || 'Business name not set', blockX, top, { width: blockWidth, align: 'right' });
-  doc.font(INTER).fontSize(9).fillColor(GREY);
-  const cityLine = [profile.city, [profile.region, profile.postalCode].filter(Boolean).join(' ')]
-    .filter(Boolean)
-    .join(', ');
-  const lines = [
-    profile.street,
-    cityLine,
-    [profile.phone, profile.email].filter(Boolean).join(' · '),
-    profile.website,
-    profile.taxId ? `Tax ID ${profile.taxId}` : '',
-  ].filter(Boolean);
-  for (const line of lines) doc.text(line, { width: blockWidth, align: 'right' });
-  doc.y = Math.max(doc.y, logoBottom) + 24;
-  doc.x = MARGIN;
-}
-
-function drawParties(doc: PDFKit.PDFDocument, document: InvoiceDocument): void {
-  const { invoice } = document;
-  doc.font(INTER_BOLD).fontSize(20).fillColor(TEAL).text(invoiceTitle(invoice), MARGIN, doc.y);
-  doc.moveDown(0.5);
-  const top = doc.y;
-  const half = CONTENT_WIDTH / 2;
-
-  doc
-    .font(INTER_BOLD)
-    .fontSize(9)
-    .fillColor(GREY)
-    .text('Bill to', MARGIN, top, { width: half - 12 });
-  doc
-    .font(INTER_BOLD)
-    .fontSize(11)
-    .fillColor(INK)
-    .text(invoice.billToName, { width: half - 12 });
-  doc.font(INTER).fontSize(9);
-  for (const line of invoice.billToAddress.split('\n').filter(Boolean)) doc.text(line, { width: half - 12 });
-  if (invoice.billToEmail) doc.text(invoice.billToEmail, { width: half - 12 });
-  const leftBottom = doc.y;
-
-  const facts: [string, string][] = invoice.issueDate
-    ? [
-        ['Issue date', invoice.issueDate],
-        ['Due date', invoice.dueDate ?? '–'],
-        ['Terms', invoice.termsDays === 0 ? 'Due on receipt' : `${invoice.termsDays} days`],
-      ]
-    : [['Status', 'Draft: the number and dates are given when it is issued']];
-  doc.y = top;
-  for (const [label, value] of facts) {
-    const y = doc.y;
-    doc
-      .font(INTER)
-      .fontSize(9)
-      .fillColor(GREY)
-      .text(label, MARGIN + half, y, { width: 80 });
-    doc
-      .font(INTER_BOLD)
-      .fillColor(INK)
-      .text(value, MARGIN + half + 80, y, { width: half - 80, align: 'right' });
-  }
-  doc.y = Math.max(leftBottom, doc.y) + 20;
-  doc.x = MARGIN;
+function drawParties(doc: PDFKit.PDFDocument, { invoice }: InvoiceDocument): void {
+  drawAddressee(doc, {
+    title: invoiceTitle(invoice),
+    label: 'Bill to',
+    name: invoice.billToName,
+    lines: invoice.billToAddress.split('\n').filter(Boolean),
+    email: invoice.billToEmail,
+    facts: invoice.issueDate
+      ? [
+          ['Issue date', invoice.issueDate],
+          ['Due date', invoice.dueDate ?? '–'],
+          ['Terms', invoice.termsDays === 0 ? 'Due on receipt' : `${invoice.termsDays} days`],
+        ]
+      : [['Status', 'Draft: the number and dates are given when it is issued']],
+  });
 }
 
 function drawLines(doc: PDFKit.PDFDocument, document: InvoiceDocument): void {
@@ -305,7 +242,7 @@ function drawStamp(doc: PDFKit.PDFDocument, { invoice }: InvoiceDocument): void 
   doc.switchToPage(0);
   const color = word === 'PAID' ? '#1f7a3a' : '#a02020';
   doc.save();
-  doc.rotate(-18, { origin: [PAGE_WIDTH / 2, 330] });
+  doc.rotate(-18, { origin: [PAGE.width / 2, 330] });
   doc.font(INTER_BOLD).fontSize(72).fillColor(color).fillOpacity(0.18);
   doc.text(word, MARGIN, 290, { width: CONTENT_WIDTH, align: 'center', lineBreak: false });
   doc.restore();

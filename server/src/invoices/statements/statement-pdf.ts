@@ -1,18 +1,15 @@
 import { formatMoney } from '@keenroute/shared';
 import { INTER, INTER_BOLD } from '../../common/pdf/fonts';
+import { COLOURS, CONTENT_WIDTH, PAGE, drawAddressee, drawLetterhead } from '../../common/pdf/letterhead';
 import { renderToBuffer } from '../../common/pdf/render-to-buffer';
 import type { BusinessProfile } from '../entities/business-profile.entity';
 import type { StatementLedger } from './statement-ledger';
 
-const MARGIN = 48;
-const PAGE_WIDTH = 612; // US Letter, points
-const CONTENT_WIDTH = PAGE_WIDTH - 2 * MARGIN;
+const MARGIN = PAGE.margin;
 const DATE_WIDTH = 70;
 const AMOUNT_WIDTH = 76;
 const DESCRIPTION_WIDTH = CONTENT_WIDTH - DATE_WIDTH - 3 * AMOUNT_WIDTH;
-const TEAL = '#1d5c63';
-const GREY = '#555555';
-const INK = '#000000';
+const { grey: GREY, ink: INK } = COLOURS;
 
 export interface StatementDocument {
   profile: BusinessProfile;
@@ -45,7 +42,7 @@ export function renderStatementPdf(document: StatementDocument): Promise<Buffer>
     },
   };
   return renderToBuffer(options, (doc) => {
-    drawHeader(doc, document);
+    drawLetterhead(doc, document.profile, document.logo);
     drawAccount(doc, document);
     drawSummary(doc, document);
     drawEntries(doc, document);
@@ -53,70 +50,20 @@ export function renderStatementPdf(document: StatementDocument): Promise<Buffer>
   });
 }
 
-function drawHeader(doc: PDFKit.PDFDocument, { profile, logo }: StatementDocument): void {
-  let logoBottom = MARGIN;
-  if (logo) {
-    try {
-      doc.image(logo, MARGIN, MARGIN, { fit: [160, 64] });
-      logoBottom = MARGIN + 64;
-    } catch {
-      // A logo pdfkit cannot read leaves the header text-only rather than failing the statement.
-    }
-  }
-  const x = MARGIN + CONTENT_WIDTH / 2;
-  const width = CONTENT_WIDTH / 2;
-  doc.font(INTER_BOLD).fontSize(12).fillColor(INK);
-  doc.text(profile.name || 'Business name not set', x, MARGIN, { width, align: 'right' });
-  doc.font(INTER).fontSize(9).fillColor(GREY);
-  const cityLine = [profile.city, [profile.region, profile.postalCode].filter(Boolean).join(' ')]
-    .filter(Boolean)
-    .join(', ');
-  for (const line of [profile.street, cityLine, [profile.phone, profile.email].filter(Boolean).join(' · ')]) {
-    if (line) doc.text(line, { width, align: 'right' });
-  }
-  doc.y = Math.max(doc.y, logoBottom) + 24;
-  doc.x = MARGIN;
-}
-
 function drawAccount(doc: PDFKit.PDFDocument, { account, ledger, statementDate, currency }: StatementDocument): void {
-  doc.font(INTER_BOLD).fontSize(20).fillColor(TEAL).text('Statement of account', MARGIN, doc.y);
-  doc.moveDown(0.5);
-  const top = doc.y;
-  const half = CONTENT_WIDTH / 2;
-  doc
-    .font(INTER_BOLD)
-    .fontSize(9)
-    .fillColor(GREY)
-    .text('Account', MARGIN, top, { width: half - 12 });
-  doc
-    .font(INTER_BOLD)
-    .fontSize(11)
-    .fillColor(INK)
-    .text(account.name, { width: half - 12 });
-  doc.font(INTER).fontSize(9);
-  for (const line of account.addressLines) doc.text(line, { width: half - 12 });
-  if (account.email) doc.text(account.email, { width: half - 12 });
-  const leftBottom = doc.y;
-  doc.y = top;
-  const facts: [string, string][] = [
-    ['Statement date', statementDate],
-    ['Period', `${ledger.from} to ${ledger.to}`],
-    ['Currency', currency],
-  ];
-  for (const [label, value] of facts) {
-    const y = doc.y;
-    doc
-      .font(INTER)
-      .fontSize(9)
-      .fillColor(GREY)
-      .text(label, MARGIN + half, y, { width: 90 });
-    doc
-      .font(INTER_BOLD)
-      .fillColor(INK)
-      .text(value, MARGIN + half + 90, y, { width: half - 90, align: 'right' });
-  }
-  doc.y = Math.max(leftBottom, doc.y) + 20;
-  doc.x = MARGIN;
+  drawAddressee(doc, {
+    title: 'Statement of account',
+    label: 'Account',
+    name: account.name,
+    lines: account.addressLines,
+    email: account.email,
+    facts: [
+      ['Statement date', statementDate],
+      ['Period', `${ledger.from} to ${ledger.to}`],
+      ['Currency', currency],
+    ],
+    factLabelWidth: 90,
+  });
 }
 
 function drawSummary(doc: PDFKit.PDFDocument, { ledger, currency }: StatementDocument): void {
