@@ -7,22 +7,22 @@ export class PageQueryDto {
   @ApiPropertyOptional({ default: 1 })
   @IsOptional()
   @Type(() => Number)
-  @IsInt()
-  @Min(1)
+  @IsInt({ message: 'page is a whole number from 1.' })
+  @Min(1, { message: 'page is a whole number from 1.' })
   page = 1;
 
   @ApiPropertyOptional({ default: 25, maximum: 100 })
   @IsOptional()
   @Type(() => Number)
-  @IsInt()
-  @Min(1)
-  @Max(100)
+  @IsInt({ message: 'pageSize is a whole number from 1 to 100.' })
+  @Min(1, { message: 'pageSize is a whole number from 1 to 100.' })
+  @Max(100, { message: 'pageSize is a whole number from 1 to 100.' })
   pageSize = 25;
 
   @ApiPropertyOptional({ description: 'Search text' })
   @IsOptional()
-  @IsString()
-  @MaxLength(100)
+  @IsString({ message: 'Search text is up to 100 characters.' })
+  @MaxLength(100, { message: 'Search text is up to 100 characters.' })
   q?: string;
 
   @ApiPropertyOptional({ enum: ['asc', 'desc'], default: 'asc' })

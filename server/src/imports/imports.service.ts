@@ -6,7 +6,7 @@ import { DataSource, Repository } from 'typeorm';
 import type { Actor } from '../auth/actor';
 import { DomainError, notFound } from '../common/errors/domain-error';
 import type { AppConfig } from '../config/environment';
-import { todayIn } from './business-day';
+import { todayIn } from '../stops/business-today';
 import { headerProblem } from './csv/check-header';
 import { parseCsv } from './csv/parse-csv';
 import { templateCsv } from './csv/template-csv';
