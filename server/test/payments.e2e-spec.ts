@@ -144,6 +144,19 @@ describe('invoice payments (e2e)', () => {
         .expect(409);
       expect(refused.body.message).toMatch(/void/);
     });
+
+    it('offers no online payment for a balance under the service’s 50-cent minimum (USD, its published table)', async () => {
+      const invoice = await issued();
+      await pay(invoice.id, { method: 'cash', amountCents: invoice.totalCents - 30 }).expect(201);
+      const page = (await publicRead(tokenOf(invoice)).expect(200)).body as PublicInvoiceDto;
+      expect(page).toMatchObject({ status: 'part-paid', balanceCents: 30, canPayOnline: false });
+      const refused = await http()
+        .post(`/api/public/invoices/${tokenOf(invoice)}/checkout`)
+        .expect(409);
+      expect(refused.body.message).toBe(
+        'The $0.30 still owed is below the smallest online payment ($0.50); pay it by cash or cheque.',
+      );
+    });
   });
 
   describe('online checkout through the stand-in', () => {

@@ -1,3 +1,4 @@
+import { formatMoney } from '@keenroute/shared';
 import { Inject, Injectable, Logger, ServiceUnavailableException } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectDataSource } from '@nestjs/typeorm';
@@ -7,7 +8,7 @@ import { DomainError } from '../../common/errors/domain-error';
 import type { AppConfig } from '../../config/environment';
 import { InvoiceCheckout } from '../entities/invoice-checkout.entity';
 import { STRIPE_CLIENT } from '../stripe-client';
-import { owedCents, PublicInvoicesService } from './public-invoices.service';
+import { onlineMinimumCents, owedCents, PublicInvoicesService } from './public-invoices.service';
 
 /**
  * A checkout opened for the same amount this recently is handed out again, so a double click or a reload does not
@@ -40,6 +41,14 @@ export class InvoiceCheckouts {
     }
     const amountCents = owedCents(invoice);
     if (amountCents === 0) throw new DomainError('conflict', `Invoice ${invoice.number} is paid; nothing is owed.`);
+    const minimum = onlineMinimumCents(invoice.currency);
+    if (amountCents < minimum) {
+      throw new DomainError(
+        'conflict',
+        `The ${formatMoney(amountCents, invoice.currency)} still owed is below the smallest online payment ` +
+          `(${formatMoney(minimum, invoice.currency)}); pay it by cash or cheque.`,
+      );
+    }
 
     const checkouts = this.dataSource.getRepository(InvoiceCheckout);
     const recent = await checkouts.findOne({

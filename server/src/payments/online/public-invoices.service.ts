@@ -18,8 +18,16 @@ export type IssuedInvoice = Invoice & { number: string; issueDate: string; dueDa
 /** Owed now: nothing on a void invoice, whatever its total was. */
 export const owedCents = (invoice: Invoice) => (invoice.status === 'void' ? 0 : balanceCents(invoice));
 
+/**
+ * The smallest charge the payment service takes: 50 cents for USD in its published "minimum and maximum charge
+ * amounts" table; other currencies have their own minimum there, and 50 minor units is taken for them until listed.
+ */
+const ONLINE_MINIMUM_CENTS: Readonly<Record<string, number>> = { USD: 50 };
+export const onlineMinimumCents = (currency: string) => ONLINE_MINIMUM_CENTS[currency] ?? 50;
+
 export const canPayOnline = (invoice: Invoice) =>
-  (invoice.status === 'sent' || invoice.status === 'part-paid') && owedCents(invoice) > 0;
+  (invoice.status === 'sent' || invoice.status === 'part-paid') &&
+  owedCents(invoice) >= onlineMinimumCents(invoice.currency);
 
 /**
  * The public side of an invoice, reached only through its signed pay link. A link that does not verify, or names a
