@@ -19,14 +19,37 @@ const REGISTRY_PAGES = ['Coming due', 'Stops', 'Customers', 'Shears', 'Drop-offs
 const ROLE_PAGES: Record<Role, { label: string; nav: string[] }> = {
   owner: {
     label: 'Owner',
-    nav: ['Home', 'Week plan', 'Tickets', ...REGISTRY_PAGES, 'Import', 'Edge recipes', 'Team', 'Rates', 'Outbox'],
+    nav: [
+      'Home',
+      'Week plan',
+      'Tickets',
+      ...REGISTRY_PAGES,
+      'Invoices',
+      'Import',
+      'Edge recipes',
+      'Team',
+      'Rates',
+      'Business profile',
+      'Outbox',
+    ],
   },
   office: {
     label: 'Office',
-    nav: ['Home', 'Week plan', 'Tickets', ...REGISTRY_PAGES, 'Import', 'Edge recipes', 'Team', 'Rates'],
+    nav: [
+      'Home',
+      'Week plan',
+      'Tickets',
+      ...REGISTRY_PAGES,
+      'Invoices',
+      'Import',
+      'Edge recipes',
+      'Team',
+      'Rates',
+      'Business profile',
+    ],
   },
   sharpener: { label: 'Sharpener', nav: ['Home', 'Today', 'My week', 'Tickets', ...REGISTRY_PAGES, 'Edge recipes'] },
-  client: { label: 'Client', nav: ['Home', 'My shears', 'Book a drop-off'] },
+  client: { label: 'Client', nav: ['Home', 'My shears', 'Book a drop-off', 'My invoices'] },
 };
 
 describe('each demo role in a browser', () => {
