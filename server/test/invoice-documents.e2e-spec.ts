@@ -1,7 +1,6 @@
 import type { INestApplication } from '@nestjs/common';
 import { formatMoney } from '@keenroute/shared';
 import { simpleParser } from 'mailparser';
-import { PDFParse } from 'pdf-parse';
 import sharp from 'sharp';
 import request from 'supertest';
 import type { App } from 'supertest/types';
@@ -25,6 +24,7 @@ import {
 } from './utils/invoice-fixtures';
 import { waitForMail } from './utils/mail-catcher';
 import { createTestApp } from './utils/test-app';
+import { binary, pdfText } from './utils/binary';
 
 const PROFILE = {
   name: 'Larkhaven Edge Works (demo)',
@@ -42,12 +42,6 @@ const PROFILE = {
   reminderDays: [7, 21, 45],
 };
 
-const binary = (res: request.Response, done: (error: Error | null, body: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  res.on('data', (chunk: Buffer) => chunks.push(chunk));
-  res.on('end', () => done(null, Buffer.concat(chunks)));
-};
-const pdfText = async (pdf: Buffer) => (await new PDFParse({ data: new Uint8Array(pdf) }).getText()).text;
 /** Pictures drawn in the PDF: image objects, less the transparency masks pdfkit writes as images of their own. */
 const imageCount = (pdf: Buffer) => {
   const bytes = pdf.toString('latin1');

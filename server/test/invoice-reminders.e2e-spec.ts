@@ -1,7 +1,6 @@
 import type { INestApplication } from '@nestjs/common';
 import { addDays, formatMoney } from '@keenroute/shared';
 import { simpleParser } from 'mailparser';
-import { PDFParse } from 'pdf-parse';
 import request from 'supertest';
 import type { App } from 'supertest/types';
 import { DataSource } from 'typeorm';
@@ -26,6 +25,7 @@ import {
 } from './utils/invoice-fixtures';
 import { mailTo, type CaughtMail } from './utils/mail-catcher';
 import { createTestApp } from './utils/test-app';
+import { pdfText } from './utils/binary';
 
 /** The nodemailer transport inside MailService, as far as the relay-failure test needs it. */
 type Sender = { sendMail(mail: unknown): Promise<unknown> };
@@ -49,7 +49,6 @@ async function eventually<T>(what: string, check: () => Promise<T | undefined>, 
   }
 }
 
-const pdfText = async (pdf: Buffer) => (await new PDFParse({ data: new Uint8Array(pdf) }).getText()).text;
 const money = (cents: number) => formatMoney(cents, 'USD');
 
 /**

@@ -1,6 +1,5 @@
 import type { INestApplication } from '@nestjs/common';
 import { addDays, formatMoney } from '@keenroute/shared';
-import { PDFParse } from 'pdf-parse';
 import request from 'supertest';
 import type { App } from 'supertest/types';
 import { DataSource } from 'typeorm';
@@ -18,13 +17,8 @@ import {
   type StopRef,
 } from './utils/invoice-fixtures';
 import { createTestApp } from './utils/test-app';
+import { binary, pdfText } from './utils/binary';
 
-const binary = (res: request.Response, done: (error: Error | null, body: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  res.on('data', (chunk: Buffer) => chunks.push(chunk));
-  res.on('end', () => done(null, Buffer.concat(chunks)));
-};
-const pdfText = async (pdf: Buffer) => (await new PDFParse({ data: new Uint8Array(pdf) }).getText()).text;
 const money = (cents: number) => formatMoney(cents, 'USD');
 
 /**

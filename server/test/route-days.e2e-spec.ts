@@ -9,7 +9,6 @@ import {
   type Role,
 } from '@keenroute/shared';
 import { randomUUID } from 'node:crypto';
-import { PDFParse } from 'pdf-parse';
 import request from 'supertest';
 import type { App } from 'supertest/types';
 import { DataSource } from 'typeorm';
@@ -17,6 +16,7 @@ import { ExpectedBenchService } from '../src/route-days/planning/expected-bench'
 import type { RouteDayDto, WeekDto } from '../src/route-days/dto/route-day-response.dto';
 import { RouteDaysService } from '../src/route-days/route-days.service';
 import { createTestApp, createUser, signIn } from './utils/test-app';
+import { pdfText } from './utils/binary';
 
 /**
  * Route days through the API: planning settings, "plan the week", moves, locks, the day sheet, and who may do what.
@@ -418,7 +418,7 @@ describe('route days (e2e)', () => {
         })
         .expect(200);
       expect(pdf.headers['content-type']).toBe('application/pdf');
-      const text = (await new PDFParse({ data: new Uint8Array(pdf.body as Buffer) }).getText()).text;
+      const text = await pdfText(pdf.body as Buffer);
       expect(text).toContain(day.stops[0]!.name);
       expect(text).toContain('Day sheet');
       await http().get(`/api/route-days/${day.id}/sheet`).set(bearer('otherSharpener')).expect(404);

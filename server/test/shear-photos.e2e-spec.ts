@@ -10,12 +10,7 @@ import { DataSource } from 'typeorm';
 import { ShearPhoto } from '../src/shears/entities/shear-photo.entity';
 import { Stop } from '../src/stops/entities/stop.entity';
 import { createTestApp, createUser, signIn } from './utils/test-app';
-
-function binary(response: request.Response, done: (error: Error | null, body: Buffer) => void) {
-  const chunks: Buffer[] = [];
-  response.on('data', (chunk: Buffer) => chunks.push(chunk));
-  response.on('end', () => done(null, Buffer.concat(chunks)));
-}
+import { binary } from './utils/binary';
 
 const solid = (width: number, height: number) =>
   sharp({ create: { width, height, channels: 3, background: { r: 29, g: 92, b: 99 } } });

@@ -7,19 +7,13 @@ import { ShearHistoryEntry } from '../src/shears/entities/shear-history-entry.en
 import { Shear } from '../src/shears/entities/shear.entity';
 import { Stop } from '../src/stops/entities/stop.entity';
 import { createTestApp, createUser, signIn } from './utils/test-app';
+import { binary } from './utils/binary';
 
 interface ShearBody {
   id: string;
   tagCode: string;
   history: { kind: string; summary: string; happenedOn: string }[];
   [key: string]: unknown;
-}
-
-/** Collects a binary response (a PDF) into a Buffer. */
-function binary(response: request.Response, done: (error: Error | null, body: Buffer) => void) {
-  const chunks: Buffer[] = [];
-  response.on('data', (chunk: Buffer) => chunks.push(chunk));
-  response.on('end', () => done(null, Buffer.concat(chunks)));
 }
 
 const serialOf = (tagCode: string) => Number(tagCode.slice(3));
