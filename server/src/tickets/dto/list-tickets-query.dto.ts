@@ -1,10 +1,12 @@
-import { ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiPropertyOptional, PickType } from '@nestjs/swagger';
+import { PageQueryDto } from '../../common/pagination.dto';
 import { Type } from 'class-transformer';
 import { IsIn, IsInt, IsOptional, IsUUID, Max, Min } from 'class-validator';
 import { IsCalendarDate } from '../../stops/dto/stop-validators';
 import { SETTLEMENTS, TICKET_STATUSES, type Settlement, type TicketStatus } from '../entities/ticket.entity';
 
-export class ListTicketsQueryDto {
+/** The day's or stop's tickets; page as every list has it, and longer pages (a full stop visit fits on one). */
+export class ListTicketsQueryDto extends PickType(PageQueryDto, ['page'] as const) {
   @ApiPropertyOptional({ example: '2026-12-09', description: 'The visit day' })
   @IsOptional()
   @IsCalendarDate({ message: 'day is a date like 2026-12-09.' })
@@ -34,13 +36,6 @@ export class ListTicketsQueryDto {
   @IsOptional()
   @IsIn(SETTLEMENTS, { message: `Choose a settlement: ${SETTLEMENTS.join(', ')}.` })
   settlement?: Settlement;
-
-  @ApiPropertyOptional({ default: 1 })
-  @IsOptional()
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
-  page = 1;
 
   @ApiPropertyOptional({ default: 50, maximum: 200 })
   @IsOptional()
