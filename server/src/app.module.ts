@@ -27,6 +27,7 @@ import { PaymentsModule } from './payments/payments.module';
 import { JobsModule } from './jobs/jobs.module';
 import { MailModule } from './mail/mail.module';
 import { RatesModule } from './rates/rates.module';
+import { ReportsModule } from './reports/reports.module';
 import { CalendarModule } from './route-days/calendar/calendar.module';
 import { VisitNoticesModule } from './route-days/notices/visit-notices.module';
 import { RouteDaysModule } from './route-days/route-days.module';
@@ -112,6 +113,7 @@ const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
     StatementsModule,
     InvoiceDocumentsModule,
     PaymentsModule,
+    ReportsModule,
     // Last: the notices and calendar routes under /route-days/ are literal paths that must match before :id.
     RouteDaysModule,
   ],

@@ -6,6 +6,7 @@ import { CreateRouteDays1764892800000 } from './1764892800000-CreateRouteDays';
 import { CreateBookings1764979200000 } from './1764979200000-CreateBookings';
 import { CreateTickets1764979200001 } from './1764979200001-CreateTickets';
 import { CreateInvoices1765065600000 } from './1765065600000-CreateInvoices';
+import { AddReportIndexes1765152000000 } from './1765152000000-AddReportIndexes';
 
 /** Listed explicitly, oldest first, so the CLI, the app and jest load the same migrations without globs. */
 export const migrations = [
@@ -17,4 +18,5 @@ export const migrations = [
   CreateBookings1764979200000,
   CreateTickets1764979200001,
   CreateInvoices1765065600000,
+  AddReportIndexes1765152000000,
 ];
