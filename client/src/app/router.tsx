@@ -300,6 +300,42 @@ export const routes: RouteObject[] = [
                 ],
               },
               {
+                // Every report is for owner and office alike.
+                element: <RequireRole roles={paths.reports.stops.roles} />,
+                children: [
+                  {
+                    path: paths.reports.stops.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/reports/routes/stops-report')).StopsReportRoute,
+                    }),
+                  },
+                  {
+                    path: paths.reports.revenue.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/reports/routes/revenue-report')).RevenueReportRoute,
+                    }),
+                  },
+                  {
+                    path: paths.reports.receivables.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/reports/routes/receivables-report')).ReceivablesReportRoute,
+                    }),
+                  },
+                  {
+                    path: paths.reports.cadence.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/reports/routes/cadence-report')).CadenceReportRoute,
+                    }),
+                  },
+                  {
+                    path: paths.reports.driveCost.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/reports/routes/drive-cost-report')).DriveCostReportRoute,
+                    }),
+                  },
+                ],
+              },
+              {
                 element: <RequireRole roles={paths.businessProfile.roles} />,
                 children: [
                   {

@@ -3,6 +3,7 @@ import {
   IconBuildingBank,
   IconBuildingStore,
   IconCalendarWeek,
+  IconChartBar,
   IconRoute,
   IconSun,
   IconTicket,
@@ -113,6 +114,14 @@ export const NAV_ITEMS: readonly NavItem[] = [
     roles: paths.invoices.list.roles,
     summary:
       'Turn finished tickets into invoices per customer or per stop; send them, record payments, follow overdue.',
+  },
+  {
+    label: 'Reports',
+    href: paths.reports.stops.getHref(),
+    icon: IconChartBar,
+    roles: paths.reports.stops.roles,
+    summary:
+      'Revenue per stop, route day, sharpener and month; which stops pay for the drive, cadence kept, what is owed.',
   },
   {
     label: 'My shears',

@@ -103,6 +103,22 @@ export const paths = {
     },
     mine: { path: '/my-invoices', roles: CLIENT_ONLY, getHref: () => '/my-invoices' },
   },
+  // Stop earnings and the other revenue reports: the owner's, and the office's who plans the weeks.
+  reports: {
+    stops: { path: '/reports', roles: ADMIN_ROLES, getHref: (search = '') => `/reports${search}` },
+    revenue: { path: '/reports/revenue', roles: ADMIN_ROLES, getHref: (search = '') => `/reports/revenue${search}` },
+    receivables: {
+      path: '/reports/receivables',
+      roles: ADMIN_ROLES,
+      getHref: (search = '') => `/reports/receivables${search}`,
+    },
+    cadence: { path: '/reports/cadence', roles: ADMIN_ROLES, getHref: (search = '') => `/reports/cadence${search}` },
+    driveCost: {
+      path: '/reports/drive-cost',
+      roles: ADMIN_ROLES,
+      getHref: (search = '') => `/reports/drive-cost${search}`,
+    },
+  },
   businessProfile: { path: '/settings/business', roles: ADMIN_ROLES, getHref: () => '/settings/business' },
   // Public: the private pay link printed on the invoice and in its e-mail; done is where the checkout returns.
   pay: {

@@ -38,5 +38,15 @@ describe('the home page', () => {
     expect(screen.getByRole('link', { name: /^Outbox/ })).toHaveAttribute('href', '/dev/outbox');
     expect(screen.getByRole('link', { name: /^Invoices/ })).toHaveAttribute('href', '/invoices');
     expect(screen.getByRole('link', { name: /^Business profile/ })).toHaveAttribute('href', '/settings/business');
+    expect(screen.getByRole('link', { name: /^Reports/ })).toHaveAttribute('href', '/reports');
+    // Stop earnings was the last page PRODUCT.md plans for an owner; nothing is on the way now.
+    expect(screen.queryByRole('heading', { name: 'On the way' })).not.toBeInTheDocument();
+  });
+
+  it('links the office to the reports too, and lists nothing as on the way', () => {
+    signInAs('office');
+    renderWithProviders(<HomeRoute />);
+    expect(screen.getByRole('link', { name: /^Reports/ })).toHaveAttribute('href', '/reports');
+    expect(screen.queryByRole('heading', { name: 'On the way' })).not.toBeInTheDocument();
   });
 });
