@@ -8,7 +8,11 @@ import { reportCsv } from './report-csv';
 import { REPORT_NAMES, type ReportName } from './report-queries';
 import { ReportsService } from './reports.service';
 
-const NAME_OPTIONS = Object.fromEntries(REPORT_NAMES.map((name) => [name, name])) as Record<ReportName, ReportName>;
+/** A report name from the path, or 404: the names are the report routes'. */
+function reportNamePipe() {
+  const names = Object.fromEntries(REPORT_NAMES.map((name) => [name, name])) as Record<ReportName, ReportName>;
+  return new ParseEnumPipe(names, { exceptionFactory: () => notFound('That report') });
+}
 
 /** The owner's figures: revenue per stop, route day, sharpener, edge type and month; receivables; cadence; drive cost. */
 @ApiTags('reports')
@@ -68,12 +72,12 @@ export class ReportsController {
   @ApiProduces('text/csv')
   @ApiParam({ name: 'name', enum: REPORT_NAMES })
   async csv(
-    @Param('name', new ParseEnumPipe(NAME_OPTIONS, { exceptionFactory: () => notFound('That report') }))
+    @Param('name', reportNamePipe())
     name: ReportName,
     @Query() query: AnyReportQueryDto,
     @Res({ passthrough: true }) response: Response,
   ): Promise<string> {
-    const answer = await this.answerOf(name, query);
+    const answer = await this.reports.byName(name, query);
     // Headers only once the report is made: a refused range still answers as JSON.
     response.setHeader('Content-Type', 'text/csv; charset=utf-8');
     response.setHeader(
@@ -81,20 +85,5 @@ export class ReportsController {
       `attachment; filename="keenroute-${name}-${answer.from}-${answer.to}.csv"`,
     );
     return reportCsv(name, answer);
-  }
-
-  private answerOf(name: ReportName, query: AnyReportQueryDto) {
-    const run: Record<ReportName, () => Promise<{ from: string; to: string; rows: object[]; totals?: object }>> = {
-      stops: () => this.reports.stops(query),
-      months: () => this.reports.months(query),
-      'route-days': () => this.reports.routeDays(query),
-      sharpeners: () => this.reports.sharpeners(query),
-      'edge-types': () => this.reports.edgeTypes(query),
-      'tool-kinds': () => this.reports.toolKinds(query),
-      receivables: () => this.reports.receivables(query),
-      cadence: () => this.reports.cadence(query),
-      'drive-cost': () => this.reports.driveCost(query),
-    };
-    return run[name]();
   }
 }

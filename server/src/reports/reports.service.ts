@@ -188,4 +188,20 @@ export class ReportsService {
     });
     return { ...this.answer(range, rows), medianPerRouteHourCents: median };
   }
+
+  /** Any report by its route name: what the CSV route serves. */
+  byName(name: ReportName, query: AnyReportQueryDto): Promise<ReportAnswer<object>> {
+    const run: Record<ReportName, () => Promise<ReportAnswer<object>>> = {
+      stops: () => this.stops(query),
+      months: () => this.months(query),
+      'route-days': () => this.routeDays(query),
+      sharpeners: () => this.sharpeners(query),
+      'edge-types': () => this.edgeTypes(query),
+      'tool-kinds': () => this.toolKinds(query),
+      receivables: () => this.receivables(query),
+      cadence: () => this.cadence(query),
+      'drive-cost': () => this.driveCost(query),
+    };
+    return run[name]();
+  }
 }

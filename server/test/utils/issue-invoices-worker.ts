@@ -39,10 +39,12 @@ async function main(): Promise<void> {
   }
 }
 
+// Letting go of the IPC channel is what lets the worker end on its own once the app has closed.
 main().then(
-  () => process.exit(0),
+  () => process.disconnect?.(),
   async (error: unknown) => {
     await send({ error: error instanceof Error ? (error.stack ?? error.message) : String(error) });
-    process.exit(1);
+    process.exitCode = 1;
+    process.disconnect?.();
   },
 );
