@@ -75,8 +75,9 @@ export async function seedDemoData(env: NodeJS.ProcessEnv): Promise<void> {
 }
 
 /**
- * The demo's route days: signs in as the demo owner and plans this week and next when neither has any route day, so
- * the sharpener's Today and My week pages have something to show. Through the API, as a planner would.
+ * The demo's route days: signs in as the demo owner and plans this week and next when neither has a route day from
+ * today on (the seeded history's days are all past), so the sharpener's Today and My week pages have something to
+ * show. Through the API, as a planner would.
  */
 export async function planDemoWeeks(origin: string): Promise<void> {
   const login = await fetch(`${origin}/api/auth/login`, {
@@ -89,15 +90,17 @@ export async function planDemoWeeks(origin: string): Promise<void> {
   const headers = { authorization: `Bearer ${accessToken}`, 'content-type': 'application/json' };
   const thisWeek = (await (await fetch(`${origin}/api/route-days`, { headers })).json()) as {
     today: string;
-    days: unknown[];
+    days: { day: string }[];
   };
   const next = new Date(`${thisWeek.today}T12:00:00Z`);
   next.setUTCDate(next.getUTCDate() + 7);
   const nextWeek = next.toISOString().slice(0, 10);
   const nextDays = (await (await fetch(`${origin}/api/route-days?week=${nextWeek}`, { headers })).json()) as {
-    days: unknown[];
+    days: { day: string }[];
   };
-  if (thisWeek.days.length > 0 || nextDays.days.length > 0) return;
+  // The seeded history fills the days already past; only a day still to come means the weeks were planned.
+  const ahead = [...thisWeek.days, ...nextDays.days].filter((day) => day.day >= thisWeek.today);
+  if (ahead.length > 0) return;
   console.log('Planning the demo route days for this week and next…');
   for (const week of [thisWeek.today, nextWeek]) {
     const planned = await fetch(`${origin}/api/route-days/plan`, {

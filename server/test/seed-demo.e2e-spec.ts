@@ -273,7 +273,13 @@ describe('demo seed (e2e)', () => {
   });
 
   it('re-seeds the registry when the users are there but the stops are not, fast, and continues the tags', async () => {
-    await db.query(`DELETE FROM shear_history; DELETE FROM shears; DELETE FROM customer_stop_history;
+    // The visit history goes first: its tickets and invoices hold on to the customers, shears and stops (and the
+    // shears' history first of all, or every ticket deleted would look through it for lines to unlink).
+    await db.query(`DELETE FROM shear_history; DELETE FROM invoice_reminders; DELETE FROM payments; DELETE FROM credit_notes;
+                    DELETE FROM invoice_lines; DELETE FROM ticket_line_overrides; DELETE FROM ticket_lines;
+                    DELETE FROM tickets; DELETE FROM invoices; DELETE FROM document_counters;
+                    DELETE FROM route_day_stops; DELETE FROM route_days`);
+    await db.query(`DELETE FROM shears; DELETE FROM customer_stop_history;
                     DELETE FROM customers; DELETE FROM stop_visits; DELETE FROM stops`);
     const users = await num(`SELECT count(*) AS n FROM users`);
     const started = Date.now();

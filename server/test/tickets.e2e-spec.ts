@@ -224,16 +224,22 @@ describe('tickets (e2e)', () => {
       );
     });
 
-    it('removes a line while open and prices the ticket again', async () => {
+    it('removes a line while open, prices the ticket again and keeps its shear count', async () => {
+      // The reports add up the stored count instead of counting lines, so it must follow every change of lines.
+      const storedCount = async () =>
+        (await db.query<{ n: number }[]>(`SELECT shear_count AS n FROM tickets WHERE id = $1`, [ticket.id]))[0]!.n;
       const ticket = await open('office', { customerId: customer.second, kind: 'walk-up' });
+      expect(await storedCount()).toBe(0);
       const one = await addShear(ticket.id, { shearId: (await createShear(customer.second)).id });
       const two = await addShear(ticket.id, { shearId: (await createShear(customer.second)).id });
       expect(two.price.subtotalCents).toBeGreaterThan(one.price.subtotalCents);
+      expect(await storedCount()).toBe(2);
       const removed = await http()
         .delete(`/api/tickets/${ticket.id}/lines/${two.lines[1]!.id}`)
         .set(as('sharpener'))
         .expect(200);
       expect((removed.body as TicketDto).price.subtotalCents).toBe(one.price.subtotalCents);
+      expect(await storedCount()).toBe(1);
     });
   });
 

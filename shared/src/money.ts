@@ -84,9 +84,17 @@ function currencyFormatter(currency: string, locale: string): Intl.NumberFormat 
   return formatter;
 }
 
-/** How many decimals the currency's minor unit has (2 for USD, 0 for JPY), as Intl knows it. */
+const digitsByCurrency = new Map<string, number>();
+
+/** How many decimals the currency's minor unit has (2 for USD, 0 for JPY), as Intl knows it; kept per currency
+ * because resolvedOptions() allocates on every call and invoices ask for it per line. */
 export function currencyDigits(currency: string): number {
-  return currencyFormatter(currency, DEFAULT_LOCALE).resolvedOptions().maximumFractionDigits ?? 2;
+  let digits = digitsByCurrency.get(currency);
+  if (digits === undefined) {
+    digits = currencyFormatter(currency, DEFAULT_LOCALE).resolvedOptions().maximumFractionDigits ?? 2;
+    digitsByCurrency.set(currency, digits);
+  }
+  return digits;
 }
 
 /** 4250 → "$42.50"; for display only, never for arithmetic. */
@@ -109,9 +117,14 @@ export function parseMoney(text: string, currency = DEFAULT_CURRENCY, field = 'a
   return assertCents(cents, field);
 }
 
+const percentFormatters = new Map<string, Intl.NumberFormat>();
+
 /** 825 → "8.25%". */
 export function formatBasisPoints(basisPoints: number, locale = DEFAULT_LOCALE): string {
-  return new Intl.NumberFormat(locale, { style: 'percent', maximumFractionDigits: 2 }).format(
-    basisPoints / BASIS_POINTS_PER_WHOLE,
-  );
+  let formatter = percentFormatters.get(locale);
+  if (!formatter) {
+    formatter = new Intl.NumberFormat(locale, { style: 'percent', maximumFractionDigits: 2 });
+    percentFormatters.set(locale, formatter);
+  }
+  return formatter.format(basisPoints / BASIS_POINTS_PER_WHOLE);
 }

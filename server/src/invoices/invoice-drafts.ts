@@ -209,7 +209,11 @@ function samePayer(tickets: Ticket[], stopById: Map<string, Stop>, label: (ticke
 }
 
 /** "Ticket 2026-12-03, Wren Talbot at Pine Street Salon": how an invoice names each ticket it bills. */
-function ticketLabel(ticket: Ticket, customer: Customer, stopById: Map<string, Stop>): string {
+export function ticketLabel(
+  ticket: Pick<Ticket, 'visitDay' | 'stopId'>,
+  customer: Pick<Customer, 'name'>,
+  stopById: ReadonlyMap<string, Pick<Stop, 'name'>>,
+): string {
   const stop = ticket.stopId ? stopById.get(ticket.stopId) : undefined;
   return `Ticket ${ticket.visitDay}, ${customer.name}${stop ? ` at ${stop.name}` : ''}`;
 }
@@ -244,14 +248,18 @@ async function invoiceLines(
   });
 }
 
-function shearDescription(line: TicketLine, shear: Shear): string {
+/** The invoice line of one shear (the demo's visit history writes its invoices with it too). */
+export function shearDescription(
+  line: Pick<TicketLine, 'addOns' | 'overrideCents'>,
+  shear: Pick<Shear, 'tagCode' | 'edgeType' | 'toolKind' | 'lengthIn' | 'handedness' | 'use'>,
+): string {
   const addOns = line.addOns.map((code) => ADD_ON_LABELS[code]);
   const work = [describeShear(shear), ...addOns].join(' + ');
   return `${shear.tagCode} ${work}${line.overrideCents !== null ? ' (price set by hand)' : ''}`;
 }
 
 /** The ticket's discount, minimum and trip charge in words: its price summary without the tax and override notes. */
-function adjustmentLabel(summary: readonly string[]): string {
+export function adjustmentLabel(summary: readonly string[]): string {
   const parts = summary.slice(0, -1).filter((part) => !part.startsWith('price set on '));
   return parts.length > 0 ? parts.join('; ') : 'ticket price adjustment';
 }

@@ -112,6 +112,7 @@ export class TicketWriter {
       subtotalCents: totals.subtotalCents,
       taxCents: totals.taxCents,
       totalCents: totals.totalCents,
+      shearCount: lines.length,
       priceSummary: totals.summary,
     });
     await manager.getRepository(Ticket).save(ticket);

@@ -156,8 +156,8 @@ export async function insertReportFixture(dataSource: DataSource, sharpenerIds: 
           const ticket = await one(
             m,
             `INSERT INTO tickets (customer_id, stop_id, route_day_id, kind, status, visit_day, tax_rate_bp,
-               rules_subtotal_cents, subtotal_cents, tax_cents, total_cents, settlement, opened_by, charge_trip)
-             VALUES ($1, $2, $3, 'visit', $4, $5, 700, $6, $6, $7, $8, $9, $10, $11) RETURNING id`,
+               rules_subtotal_cents, subtotal_cents, tax_cents, total_cents, settlement, opened_by, charge_trip, shear_count)
+             VALUES ($1, $2, $3, 'visit', $4, $5, 700, $6, $6, $7, $8, $9, $10, $11, $12) RETURNING id`,
             [
               customer.id,
               stopId,
@@ -170,6 +170,7 @@ export async function insertReportFixture(dataSource: DataSource, sharpenerIds: 
               settlement,
               sharpenerId,
               trip > 0,
+              shears.length,
             ],
           );
           for (const [k, shearId] of shears.entries()) {

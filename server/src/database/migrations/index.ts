@@ -7,6 +7,7 @@ import { CreateBookings1764979200000 } from './1764979200000-CreateBookings';
 import { CreateTickets1764979200001 } from './1764979200001-CreateTickets';
 import { CreateInvoices1765065600000 } from './1765065600000-CreateInvoices';
 import { AddReportIndexes1765152000000 } from './1765152000000-AddReportIndexes';
+import { AddTicketShearCount1765324800000 } from './1765324800000-AddTicketShearCount';
 
 /** Listed explicitly, oldest first, so the CLI, the app and jest load the same migrations without globs. */
 export const migrations = [
@@ -19,4 +20,5 @@ export const migrations = [
   CreateTickets1764979200001,
   CreateInvoices1765065600000,
   AddReportIndexes1765152000000,
+  AddTicketShearCount1765324800000,
 ];

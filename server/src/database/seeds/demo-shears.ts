@@ -149,6 +149,9 @@ const STATUS_SUMMARIES: Readonly<Record<Exclude<ShearStatus, 'in-service'>, read
   ],
   lost: ['Reported lost by the owner.', 'Lost: not returned after a shop move.'],
 };
+/** The demo's mix of shears, for other invented registries (the report benchmark's) to draw from too. */
+export const DEMO_SHEAR_MIX = { count: COUNT, toolKinds: TOOL_KINDS, edgeTypes: EDGE_TYPES, lengths: LENGTHS };
+
 const EXTRAS = ['', '', '', '; tension set', '; pivot cleaned and oiled', '; small nick at the tip ground out'];
 
 function makeAndModel(rng: DemoRandom, family: Family, toolKind: ToolKind): { make: string; model: string } {

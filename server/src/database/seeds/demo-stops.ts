@@ -52,7 +52,8 @@ const BUCKETS: readonly (readonly [DueBucket, number])[] = [
   ['next-week', 7],
 ];
 
-const CADENCES: Readonly<Record<StopKind, readonly number[]>> = {
+/** Cadences by kind of stop, in weeks (PRODUCT.md: salons every 6 to 10, grooming shops every 4 to 6). */
+export const DEMO_CADENCES: Readonly<Record<StopKind, readonly number[]>> = {
   salon: [6, 7, 8, 8, 8, 9, 10],
   barbershop: [4, 5, 6, 6],
   'grooming-shop': [4, 5, 5, 6],
@@ -70,10 +71,11 @@ function slug(name: string): string {
     .replace(/^-|-$/g, '');
 }
 
-// Nobody books a sharpening visit on these public holidays.
+// Nobody books a sharpening visit on these public holidays (the visit history keeps off them too).
 const HOLIDAYS = ['01-01', '07-04', '12-25'];
+export const isDemoHoliday = (date: string) => HOLIDAYS.includes(date.slice(5));
 const isOpen = (hours: OpeningHours, closed: readonly string[], date: string) =>
-  (hours[weekdayOf(date)]?.length ?? 0) > 0 && !closed.includes(date) && !HOLIDAYS.includes(date.slice(5));
+  (hours[weekdayOf(date)]?.length ?? 0) > 0 && !closed.includes(date) && !isDemoHoliday(date);
 
 /** The latest open day on or before the date (a visit is worked when the stop is open). */
 function openOnOrBefore(hours: OpeningHours, closed: readonly string[], date: string): string {
@@ -170,7 +172,7 @@ export function buildDemoStops(rng: DemoRandom, today: string, people: DemoPeopl
         : null,
       openingHours: hours,
       closedDates: closedDates(rng, today),
-      cadenceWeeks: rng.pick(CADENCES[spec.kind]),
+      cadenceWeeks: rng.pick(DEMO_CADENCES[spec.kind]),
       preferredWeekdays: preferredWeekdays(rng, hours),
       billingMode: billingMode(rng, spec),
       taxRateBp: spec.kind === 'school' || rng.chance(0.15) ? 0 : DEMO_TAX_RATE_BP,

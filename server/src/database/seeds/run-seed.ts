@@ -6,9 +6,10 @@ import { seedDemo } from './seed-demo';
 
 /** `npm run seed -w server`: loads the demo scenario into an empty database, and leaves a seeded one alone. */
 async function main(): Promise<void> {
-  const dataSource = await new DataSource(typeormOptions(validateEnvironment(process.env).DATABASE_URL)).initialize();
+  const environment = validateEnvironment(process.env);
+  const dataSource = await new DataSource(typeormOptions(environment.DATABASE_URL)).initialize();
   try {
-    const seeded = await seedDemo(dataSource);
+    const seeded = await seedDemo(dataSource, { timeZone: environment.BUSINESS_TIME_ZONE });
     console.log(seeded ? 'Demo data loaded (invented people and places).' : 'Demo data already present; kept as is.');
   } finally {
     await dataSource.destroy();

@@ -15,7 +15,7 @@ export const WORK_FACTS = `
   worked AS (
     SELECT t.id, t.stop_id, t.visit_day, t.kind, t.subtotal_cents, t.route_day_id,
            COALESCE(rd.sharpener_id, t.opened_by) AS sharpener_id,
-           (SELECT count(*) FROM ticket_lines l WHERE l.ticket_id = t.id) AS shears
+           t.shear_count AS shears
       FROM tickets t
       LEFT JOIN route_days rd ON rd.id = t.route_day_id
      WHERE t.status IN ('finished', 'handed-back')

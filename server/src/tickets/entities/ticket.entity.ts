@@ -80,6 +80,10 @@ export class Ticket {
   @Column({ name: 'total_cents', type: 'integer', default: 0 })
   totalCents: number;
 
+  /** How many shears (lines) the ticket holds; kept with the totals so the reports need not count lines. */
+  @Column({ name: 'shear_count', type: 'integer', default: 0 })
+  shearCount: number;
+
   @Column({ name: 'price_summary', type: 'jsonb', default: [] })
   priceSummary: string[];
 
