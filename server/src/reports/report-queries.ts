@@ -26,6 +26,8 @@ export interface SqlQuery {
 }
 
 const base = (range: ReportRange) => [range.from, range.to, range.sharpenerId, range.routeTo];
+/** The shear-line reports read no route days, so they take no last route day. */
+const lineParams = (range: ReportRange) => [range.from, range.to, range.sharpenerId];
 
 /**
  * Every report's SQL with its parameters: what the service runs, and what the report benchmark EXPLAINs. The names
@@ -39,8 +41,8 @@ export const REPORT_QUERIES = {
   }),
   'route-days': (range: ReportRange): SqlQuery => ({ sql: ROUTE_DAYS_SQL, params: base(range) }),
   sharpeners: (range: ReportRange): SqlQuery => ({ sql: SHARPENERS_SQL, params: base(range) }),
-  'edge-types': (range: ReportRange): SqlQuery => ({ sql: shearLinesSql('edge_type'), params: base(range) }),
-  'tool-kinds': (range: ReportRange): SqlQuery => ({ sql: shearLinesSql('tool_kind'), params: base(range) }),
+  'edge-types': (range: ReportRange): SqlQuery => ({ sql: shearLinesSql('edge_type'), params: lineParams(range) }),
+  'tool-kinds': (range: ReportRange): SqlQuery => ({ sql: shearLinesSql('tool_kind'), params: lineParams(range) }),
   receivables: (range: ReportRange, options: ReportOptions): SqlQuery => ({
     sql: receivablesSql(options.groupBy ?? 'customer'),
     params: [range.to, options.timeZone],

@@ -1,4 +1,4 @@
-import { WORK_FACTS } from './work-facts';
+import { WORKED } from './work-facts';
 
 export type LineGrouping = 'edge_type' | 'tool_kind';
 
@@ -6,10 +6,12 @@ export type LineGrouping = 'edge_type' | 'tool_kind';
  * The shear lines of the worked tickets grouped by the shear's edge type or tool kind, at the price the line was
  * charged (the override where there is one). Trip charges and other ticket-level amounts are not shear lines, so
  * these add up to less than the stops report's revenue. `share_bp`: the group's part of all lines' revenue.
+ * Only `worked` is taken from the common start, so PostgreSQL plans it into the join instead of materialising it.
+ * Parameters: $1 from, $2 to, $3 sharpener id or null.
  */
 export function shearLinesSql(by: LineGrouping): string {
   return `
-  WITH ${WORK_FACTS},
+  WITH ${WORKED},
   g AS (
     SELECT sh.${by} AS key, count(*) AS lines, sum(COALESCE(l.override_cents, l.price_cents)) AS revenue_cents
       FROM worked w

@@ -11,7 +11,7 @@
  * - `facts`: both, one row per ticket or stop-day, so a report can add them up in one GROUP BY. A visit is a stop on a
  *   day with a route-day stop or a worked ticket other than a drop-off.
  */
-export const WORK_FACTS = `
+export const WORKED = `
   worked AS (
     SELECT t.id, t.stop_id, t.visit_day, t.kind, t.subtotal_cents, t.route_day_id,
            COALESCE(rd.sharpener_id, t.opened_by) AS sharpener_id,
@@ -21,7 +21,9 @@ export const WORK_FACTS = `
      WHERE t.status IN ('finished', 'handed-back')
        AND t.visit_day BETWEEN $1::date AND $2::date
        AND ($3::uuid IS NULL OR COALESCE(rd.sharpener_id, t.opened_by) = $3::uuid)
-  ),
+  )`;
+
+export const STOP_TIME = `
   stop_time AS (
     SELECT rds.stop_id, rds.route_day_id, rd.day, rd.sharpener_id, rds.bench_minutes,
            CASE WHEN sum(rds.drive_minutes_before) OVER day > 0
@@ -35,7 +37,12 @@ export const WORK_FACTS = `
      WHERE rd.day BETWEEN $1::date AND $4::date
        AND ($3::uuid IS NULL OR rd.sharpener_id = $3::uuid)
     WINDOW day AS (PARTITION BY rds.route_day_id)
-  ),
+  )`;
+
+/** `worked`, `stop_time` and `facts` on top of both (the reports over visits and route time). */
+export const WORK_FACTS = `
+  ${WORKED},
+  ${STOP_TIME},
   facts AS (
     SELECT stop_id, sharpener_id, visit_day AS day, route_day_id AS ticket_route_day_id, NULL::uuid AS route_day_id,
            stop_id IS NOT NULL AND kind <> 'drop-off' AS is_visit, 1 AS tickets, subtotal_cents AS revenue_cents, shears,
