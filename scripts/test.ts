@@ -15,6 +15,9 @@ import { startRouting, type Routing } from './stand-ins/routing.js';
 import { startStripeStandIn, type StripeStandIn } from './stand-ins/stripe.js';
 
 const suiteTimeoutMs = 15 * 60_000;
+// The server's e2e suite starts API processes and a private PostgreSQL for the fault and instance tests, and the
+// client's component tests are CPU-bound: on a loaded two-core machine each has taken over 15 minutes.
+const longSuiteTimeoutMs = 30 * 60_000;
 const buildTimeoutMs = 5 * 60_000;
 
 const report = new SuiteReport();
@@ -133,12 +136,12 @@ async function main(): Promise<void> {
     await report.step(
       'suite',
       'server e2e (jest + supertest)',
-      script('server', 'test:e2e', testEnv('keenroute_test', await freePort(), payments)),
+      script('server', 'test:e2e', testEnv('keenroute_test', await freePort(), payments), longSuiteTimeoutMs),
     );
   } else {
     report.blocked('server e2e (jest + supertest)', 'the test PostgreSQL or a stand-in did not start');
   }
-  await report.step('suite', 'client (vitest)', script('client', 'test', unitEnv));
+  await report.step('suite', 'client (vitest)', script('client', 'test', unitEnv, longSuiteTimeoutMs));
 
   const serverBuilt = await report.step(
     'setup',

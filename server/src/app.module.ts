@@ -1,17 +1,20 @@
-import { Module, RequestMethod } from '@nestjs/common';
+import { Module } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
 import { APP_FILTER, APP_GUARD } from '@nestjs/core';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { ThrottlerModule } from '@nestjs/throttler';
 import { TypeOrmModule } from '@nestjs/typeorm';
-import { randomUUID } from 'node:crypto';
 import { LoggerModule } from 'nestjs-pino';
+import { DataSource } from 'typeorm';
 import { AccessModule } from './access/access.module';
+import { AuditModule } from './audit/audit.module';
 import { AuthModule } from './auth/auth.module';
 import { BookingsModule } from './bookings/bookings.module';
 import { AccessGuard } from './auth/guards/access.guard';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
+import { PostgresThrottlerStorage } from './common/throttling/postgres-throttler-storage';
 import { validateEnvironment, type AppConfig } from './config/environment';
+import { loggerParams } from './config/logger';
 import { typeormOptions } from './database/typeorm-options';
 import { CustomersModule } from './customers/customers.module';
 import { DevModule } from './dev/dev.module';
@@ -36,36 +39,12 @@ import { StopsModule } from './stops/stops.module';
 import { TicketsModule } from './tickets/tickets.module';
 import { UsersModule } from './users/users.module';
 
-const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
-
 @Module({
   imports: [
     ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, validate: validateEnvironment }),
     LoggerModule.forRootAsync({
       inject: [ConfigService],
-      useFactory: (config: ConfigService<AppConfig, true>) => ({
-        forRoutes: [{ path: '{*path}', method: RequestMethod.ALL }],
-        pinoHttp: {
-          level: config.get('LOG_LEVEL', { infer: true }),
-          // Reuse a caller's request id when it looks like one, so a load balancer's id follows the request.
-          genReqId: (req, res) => {
-            const incoming = req.headers['x-request-id'];
-            const id = typeof incoming === 'string' && REQUEST_ID.test(incoming) ? incoming : randomUUID();
-            res.setHeader('x-request-id', id);
-            return id;
-          },
-          // One line per request: who, what and how it went; headers stay out (they carry tokens and cookies).
-          serializers: {
-            req: (req: { id: unknown; method: string; url: string }) => ({
-              id: req.id,
-              method: req.method,
-              url: req.url,
-            }),
-            res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
-          },
-          autoLogging: { ignore: (req) => req.url === '/api/health' },
-        },
-      }),
+      useFactory: (config: ConfigService<AppConfig, true>) => loggerParams(config.get('LOG_LEVEL', { infer: true })),
     }),
     TypeOrmModule.forRootAsync({
       inject: [ConfigService],
@@ -76,10 +55,11 @@ const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
       }),
     }),
     ThrottlerModule.forRootAsync({
-      inject: [ConfigService],
-      useFactory: (config: ConfigService<AppConfig, true>) => ({
+      inject: [ConfigService, DataSource],
+      useFactory: (config: ConfigService<AppConfig, true>, dataSource: DataSource) => ({
         throttlers: [{ name: 'auth', ttl: 60_000, limit: config.get('AUTH_RATE_LIMIT', { infer: true }) }],
         errorMessage: 'Too many attempts. Wait a minute and try again.',
+        storage: new PostgresThrottlerStorage(dataSource),
       }),
     }),
     ServeStaticModule.forRootAsync({
@@ -113,6 +93,7 @@ const REQUEST_ID = /^[A-Za-z0-9-]{8,64}$/;
     StatementsModule,
     InvoiceDocumentsModule,
     PaymentsModule,
+    AuditModule,
     ReportsModule,
     // Last: the notices and calendar routes under /route-days/ are literal paths that must match before :id.
     RouteDaysModule,

@@ -2,10 +2,10 @@ import type { INestApplication } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import cookieParser from 'cookie-parser';
-import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
 import { createValidationPipe } from './common/validation/validation-pipe';
 import type { AppConfig } from './config/environment';
+import { securityHeaders } from './config/security-headers';
 
 /** Everything main.ts applies to the app, shared with the e2e tests so they test the same stack. */
 export function configureApp(app: INestApplication): INestApplication {
@@ -15,13 +15,7 @@ export function configureApp(app: INestApplication): INestApplication {
     .get<ConfigService<AppConfig, true>>(ConfigService)
     .get('APP_URL', { infer: true })
     .startsWith('https:');
-  // Over plain http on loopback, HSTS and upgrade-insecure-requests would send the browser to an https that is not there.
-  app.use(
-    helmet({
-      strictTransportSecurity: https,
-      contentSecurityPolicy: { directives: { upgradeInsecureRequests: https ? [] : null } },
-    }),
-  );
+  app.use(securityHeaders(https));
   app.use(cookieParser());
   app.useGlobalPipes(createValidationPipe());
   app.enableShutdownHooks();

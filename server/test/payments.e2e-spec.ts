@@ -20,6 +20,7 @@ import {
   type CustomerRef,
   type StopRef,
 } from './utils/invoice-fixtures';
+import { eventually } from './utils/faults/fault-fixtures';
 import { mailTo, waitForMail } from './utils/mail-catcher';
 import { createTestApp } from './utils/test-app';
 
@@ -305,11 +306,15 @@ describe('invoice payments (e2e)', () => {
       expect(mail.text).toContain(`balance due ${formatMoney(invoice.totalCents - amount, 'USD')}`);
       expect(mail.text).toContain(invoice.payUrl!);
       expect(mail.text).toContain('Bright Edge Sharpening (demo)');
-      const rows = await db.query<{ kind: string; status: string; receipt_sent_at: Date | null }[]>(
-        `SELECT m.kind, m.status, p.receipt_sent_at FROM invoice_mails m JOIN payments p ON p.id = m.payment_id
-          WHERE m.invoice_id = $1`,
-        [invoice.id],
-      );
+      // The receipt goes through the mail queue, which marks the log and the payment once the relay took it.
+      const rows = await eventually('the receipt to be marked sent', async () => {
+        const found = await db.query<{ kind: string; status: string; receipt_sent_at: Date | null }[]>(
+          `SELECT m.kind, m.status, p.receipt_sent_at FROM invoice_mails m JOIN payments p ON p.id = m.payment_id
+            WHERE m.invoice_id = $1`,
+          [invoice.id],
+        );
+        return found[0]?.status === 'queued' ? undefined : found;
+      });
       expect(rows).toEqual([{ kind: 'receipt', status: 'sent', receipt_sent_at: expect.any(Date) }]);
 
       // Without sendReceipt nothing is sent.

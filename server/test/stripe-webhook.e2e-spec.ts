@@ -14,7 +14,8 @@ import {
   invoiceActors,
   type CustomerRef,
 } from './utils/invoice-fixtures';
-import { mailTo } from './utils/mail-catcher';
+import { eventually } from './utils/faults/fault-fixtures';
+import { mailTo, waitForMail } from './utils/mail-catcher';
 import { createTestApp } from './utils/test-app';
 
 const SECRET = process.env.STRIPE_WEBHOOK_SECRET ?? 'whsec_keenroute_local_stand_in_secret';
@@ -164,7 +165,13 @@ describe('payment webhook (e2e)', () => {
         amount_cents: target.totalCents,
         external_id: event.data.object.payment_intent,
       });
-      expect(payments[0]!.receipt_sent_at).not.toBeNull();
+      // The receipt goes through the mail queue: it arrives, and then the payment is marked.
+      await waitForMail(customer.email!, new RegExp(`Receipt.*${target.number}`));
+      const marked = await eventually('the receipt to be marked sent', async () => {
+        const [payment] = await onlinePayments(target.id);
+        return payment?.receipt_sent_at ?? undefined;
+      });
+      expect(marked).toBeInstanceOf(Date);
       const paid = await read(target.id);
       expect(paid).toMatchObject({ status: 'paid', paidCents: target.totalCents, balanceCents: 0, payUrl: null });
       expect(paid.payments).toEqual([

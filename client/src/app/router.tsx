@@ -365,6 +365,17 @@ export const routes: RouteObject[] = [
                 ],
               },
               {
+                element: <RequireRole roles={paths.auditLog.roles} />,
+                children: [
+                  {
+                    path: paths.auditLog.path,
+                    lazy: async () => ({
+                      Component: (await import('@/features/audit/routes/audit-log')).AuditLogRoute,
+                    }),
+                  },
+                ],
+              },
+              {
                 element: <RequireRole roles={paths.devOutbox.roles} />,
                 children: [
                   {

@@ -18,6 +18,7 @@ import {
   IconListNumbers,
   IconMailOpened,
   IconReceipt2,
+  IconShieldCheck,
   IconUsersGroup,
   type Icon,
 } from '@tabler/icons-react';
@@ -180,6 +181,13 @@ export const NAV_ITEMS: readonly NavItem[] = [
     icon: IconBuildingBank,
     roles: paths.businessProfile.roles,
     summary: 'What every invoice says about the business: name, address, tax ID, logo, payment terms and reminders.',
+  },
+  {
+    label: 'Audit log',
+    href: paths.auditLog.getHref(),
+    icon: IconShieldCheck,
+    roles: paths.auditLog.roles,
+    summary: 'Who signed in, changed a role or a price, voided or credited an invoice, and took money, and when.',
   },
   {
     label: 'Outbox',

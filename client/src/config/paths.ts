@@ -127,5 +127,7 @@ export const paths = {
   },
   imports: { path: '/imports', roles: ADMIN_ROLES, getHref: () => '/imports' },
   team: { path: '/team', roles: USER_ADMIN_ROLES, getHref: () => '/team' },
+  // Who signed in, changed roles and prices, voided and took money: the owner's alone, as the API allows.
+  auditLog: { path: '/audit', roles: OWNER_ONLY, getHref: () => '/audit' },
   devOutbox: { path: '/dev/outbox', roles: OWNER_ONLY, getHref: () => '/dev/outbox' },
 } as const;

@@ -2,6 +2,7 @@ import { Module } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
+import { AuditModule } from '../audit/audit.module';
 import type { AppConfig } from '../config/environment';
 import { UsersModule } from '../users/users.module';
 import { AccountTokensModule } from './account-tokens.module';
@@ -14,6 +15,7 @@ import { JwtStrategy } from './jwt.strategy';
 @Module({
   imports: [
     UsersModule,
+    AuditModule,
     AccountTokensModule,
     PassportModule,
     JwtModule.registerAsync({

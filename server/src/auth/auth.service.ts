@@ -1,11 +1,13 @@
+import { randomUUID } from 'node:crypto';
 import { Injectable } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { JwtService } from '@nestjs/jwt';
 import { compare, hash } from 'bcryptjs';
 import { DataSource } from 'typeorm';
+import { AuditService } from '../audit/audit.service';
 import { DomainError } from '../common/errors/domain-error';
 import type { AppConfig } from '../config/environment';
-import { MailService } from '../mail/mail.service';
+import { MailOutbox } from '../mail/mail-outbox';
 import { passwordResetMail } from '../mail/templates/account-links';
 import { toUserSummary } from '../users/dto/user-response.dto';
 import type { User } from '../users/entities/user.entity';
@@ -33,16 +35,33 @@ export class AuthService {
     private readonly refreshTokens: RefreshTokensService,
     private readonly userTokens: UserTokensService,
     private readonly jwt: JwtService,
-    private readonly mail: MailService,
+    private readonly mail: MailOutbox,
     private readonly dataSource: DataSource,
     private readonly config: ConfigService<AppConfig, true>,
+    private readonly audit: AuditService,
   ) {}
 
   async login(email: string, password: string): Promise<SignedIn> {
     const user = await this.users.findByEmail(email);
     const matches = await compare(password, user?.passwordHash ?? DUMMY_HASH);
-    if (!user || !user.passwordHash || !user.active || !matches) throw wrongCredentials();
-    await this.users.recordSignIn(user.id);
+    if (!user || !user.passwordHash || !user.active || !matches) {
+      const reason = !user
+        ? 'unknown-email'
+        : !user.passwordHash
+          ? 'no-password'
+          : !user.active
+            ? 'deactivated'
+            : 'wrong-password';
+      // The e-mail as typed and why, for the owner; the caller hears only "wrong e-mail or password".
+      await this.audit.record({
+        action: 'sign-in-failed',
+        actor: { id: null, email },
+        subject: { type: 'user', id: user?.id ?? null },
+        detail: { reason },
+      });
+      throw wrongCredentials();
+    }
+    await this.recordSignIn(user, 'password');
     return this.signIn(user);
   }
 
@@ -82,7 +101,7 @@ export class AuthService {
     await this.refreshTokens.revokeAllFor(userId);
     const user = await this.users.findActive(userId);
     if (!user) throw new DomainError('forbidden', 'This account is deactivated. Ask the office to reactivate it.');
-    await this.users.recordSignIn(user.id);
+    await this.recordSignIn(user, 'password-link');
     return this.signIn(user);
   }
 
@@ -92,7 +111,19 @@ export class AuthService {
     if (!user || !user.active || !user.passwordHash) return;
     const secret = await this.userTokens.issue(user.id, 'reset');
     const link = `${this.config.get('APP_URL', { infer: true })}/set-password?token=${secret}`;
-    await this.mail.send(passwordResetMail(user.email, user.name, link));
+    // Each request is a message of its own with a new link; the key never holds the secret.
+    const key = `password-reset:${randomUUID()}`;
+    await this.mail.queue({ ...passwordResetMail(user.email, user.name, link), key, topic: 'account', refId: user.id });
+  }
+
+  private recordSignIn(user: User, via: 'password' | 'password-link'): Promise<void> {
+    return this.dataSource.transaction(async (manager) => {
+      await this.users.recordSignIn(user.id, manager);
+      await this.audit.record(
+        { action: 'sign-in', actor: user, subject: { type: 'user', id: user.id }, detail: { via, role: user.role } },
+        manager,
+      );
+    });
   }
 
   private async signIn(user: User): Promise<SignedIn> {

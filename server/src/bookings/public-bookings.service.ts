@@ -15,7 +15,7 @@ import type { Actor } from '../auth/actor';
 import { hashSecret } from '../auth/token-hash';
 import { DomainError } from '../common/errors/domain-error';
 import type { AppConfig } from '../config/environment';
-import { MailService } from '../mail/mail.service';
+import { MailOutbox } from '../mail/mail-outbox';
 import { RatesService } from '../rates/rates.service';
 import { longDayLabel } from '../route-days/notices/visit-notice-mail';
 import { Stop } from '../stops/entities/stop.entity';
@@ -49,7 +49,7 @@ export class PublicBookingsService {
     private readonly days: BookingDays,
     private readonly views: BookingViews,
     private readonly rates: RatesService,
-    private readonly mail: MailService,
+    private readonly mail: MailOutbox,
     config: ConfigService<AppConfig, true>,
   ) {
     this.appUrl = config.get('APP_URL', { infer: true });
@@ -131,7 +131,15 @@ export class PublicBookingsService {
     }
     const view = toPublicBooking(await this.views.one(outcome.id));
     const link = manageUrl(this.appUrl, token);
-    if (outcome.created) await this.mail.send(bookingConfirmationMail(view, link, await this.currency()));
+    if (outcome.created) {
+      const mail = bookingConfirmationMail(view, link, await this.currency());
+      await this.mail.queue({
+        ...mail,
+        key: `booking-confirmation:${outcome.id}`,
+        topic: 'booking',
+        refId: outcome.id,
+      });
+    }
     return { result: { booking: view, manageUrl: link }, created: outcome.created };
   }
 

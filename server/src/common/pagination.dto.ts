@@ -2,13 +2,19 @@ import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { IsIn, IsInt, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
 
+/** Far past any list Keenroute keeps (100 000 pages of 100). */
+const PAGE_MAX = 100_000;
+const PAGE_MESSAGE = `page is a whole number from 1 to ${PAGE_MAX}.`;
+
 /** page, pageSize, q and order for every list route; each list adds its own `sort` choices. */
 export class PageQueryDto {
-  @ApiPropertyOptional({ default: 1 })
+  @ApiPropertyOptional({ default: 1, maximum: PAGE_MAX })
   @IsOptional()
   @Type(() => Number)
-  @IsInt({ message: 'page is a whole number from 1.' })
-  @Min(1, { message: 'page is a whole number from 1.' })
+  @IsInt({ message: PAGE_MESSAGE })
+  @Min(1, { message: PAGE_MESSAGE })
+  // Without a cap, page=1e308 passes @IsInt() and makes an OFFSET PostgreSQL cannot read.
+  @Max(PAGE_MAX, { message: PAGE_MESSAGE })
   page = 1;
 
   @ApiPropertyOptional({ default: 25, maximum: 100 })

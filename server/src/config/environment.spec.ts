@@ -1,4 +1,4 @@
-import { validateEnvironment } from './environment';
+import { trustProxySetting, validateEnvironment } from './environment';
 
 describe('validateEnvironment', () => {
   it('fills safe local defaults', () => {
@@ -19,6 +19,15 @@ describe('validateEnvironment', () => {
     expect(() => validateEnvironment({ PORT: 'abc' })).toThrow(/PORT/);
     expect(() => validateEnvironment({ DATABASE_URL: 'mysql://x' })).toThrow(/DATABASE_URL/);
     expect(() => validateEnvironment({ JWT_SECRET: 'short' })).toThrow(/JWT_SECRET/);
+  });
+
+  it('reads TRUST_PROXY as a hop count or a list of trusted addresses', () => {
+    expect(trustProxySetting(validateEnvironment({}).TRUST_PROXY)).toBe('loopback');
+    expect(trustProxySetting(validateEnvironment({ TRUST_PROXY: '1' }).TRUST_PROXY)).toBe(1);
+    const list = 'loopback, 10.0.0.0/8, fd00::1';
+    expect(trustProxySetting(validateEnvironment({ TRUST_PROXY: list }).TRUST_PROXY)).toBe(list);
+    expect(() => validateEnvironment({ TRUST_PROXY: 'true' })).toThrow(/TRUST_PROXY: "true"/);
+    expect(() => validateEnvironment({ TRUST_PROXY: 'loopback,lb.internal' })).toThrow(/TRUST_PROXY: "lb.internal"/);
   });
 
   it('refuses the demo secret in production', () => {

@@ -1,5 +1,6 @@
 import { plainToInstance, Transform } from 'class-transformer';
 import { IsIn, IsInt, IsOptional, IsString, IsUrl, Matches, Max, Min, MinLength, validateSync } from 'class-validator';
+import { isIP } from 'node:net';
 
 /** The environment the API reads, with the safe local defaults `npm start` relies on. */
 export class Environment {
@@ -74,6 +75,24 @@ export class Environment {
   @IsIn(['on', 'off'])
   JOBS_WORKERS: 'on' | 'off' = 'on';
 
+  /** Seconds before a queued e-mail the relay refused is tried again; each later try waits about twice as long. */
+  @Transform(({ value }) => Number(value))
+  @IsInt()
+  @Min(1)
+  MAIL_RETRY_DELAY_SECONDS = 30;
+
+  /** Seconds a worker may hold one e-mail job; a worker that died holding it frees it for another after this. */
+  @Transform(({ value }) => Number(value))
+  @IsInt()
+  @Min(1)
+  MAIL_JOB_EXPIRE_SECONDS = 300;
+
+  /** How often (seconds) pg-boss looks for jobs whose worker died (expired) and makes them available again. */
+  @Transform(({ value }) => Number(value))
+  @IsInt()
+  @Min(1)
+  JOBS_MAINTENANCE_SECONDS = 120;
+
   /** When visit notices due are queued (cron, in BUSINESS_TIME_ZONE); queueing twice sends nothing twice. */
   @IsString()
   VISIT_NOTICE_CRON = '0 * * * *';
@@ -104,9 +123,35 @@ export class Environment {
   @IsInt()
   @Min(1)
   AUTH_RATE_LIMIT = 10;
+
+  /**
+   * Which proxies may name the client (X-Forwarded-For): the address the rate limits count by. 'loopback' suits a
+   * proxy on the same host; behind a load balancer elsewhere give its hop count (1) or its addresses or subnets,
+   * comma-separated, or every client shares the balancer's address and one set of limits.
+   */
+  @IsString()
+  TRUST_PROXY = 'loopback';
 }
 
 export type AppConfig = Readonly<Environment>;
+
+const PROXY_RANGES = ['loopback', 'linklocal', 'uniquelocal'];
+
+/** Express's 'trust proxy' setting from TRUST_PROXY: a hop count, or the list of trusted addresses as it is. */
+export function trustProxySetting(value: string): number | string {
+  return /^\d+$/.test(value) ? Number(value) : value;
+}
+
+function trustProxyProblem(value: string): string | null {
+  if (/^\d+$/.test(value)) return null;
+  const wrong = value
+    .split(',')
+    .map((item) => item.trim())
+    .filter((item) => !PROXY_RANGES.includes(item) && isIP(item.replace(/\/\d{1,3}$/, '')) === 0);
+  return wrong.length === 0
+    ? null
+    : `TRUST_PROXY: "${wrong.join('", "')}" is not a hop count, an address, a subnet or one of ${PROXY_RANGES.join(', ')}`;
+}
 
 /** Validates process.env once at start; a bad variable stops the server with a message naming it. */
 export function validateEnvironment(raw: Record<string, unknown>): AppConfig {
@@ -121,6 +166,8 @@ export function validateEnvironment(raw: Record<string, unknown>): AppConfig {
   if (env.NODE_ENV === 'production' && env.STRIPE_WEBHOOK_SECRET === new Environment().STRIPE_WEBHOOK_SECRET) {
     problems.push("STRIPE_WEBHOOK_SECRET: set the webhook endpoint's own signing secret in production");
   }
+  const proxyProblem = trustProxyProblem(env.TRUST_PROXY);
+  if (proxyProblem) problems.push(proxyProblem);
   if (problems.length > 0) {
     throw new Error(`Keenroute's configuration is not valid:\n  ${problems.join('\n  ')}`);
   }

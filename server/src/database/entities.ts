@@ -1,3 +1,4 @@
+import { AuditEntry } from '../audit/entities/audit-entry.entity';
 import { RefreshToken } from '../auth/entities/refresh-token.entity';
 import { UserToken } from '../auth/entities/user-token.entity';
 import { BookingItem } from '../bookings/entities/booking-item.entity';
@@ -28,6 +29,7 @@ import { Stop } from '../stops/entities/stop.entity';
 import { TicketLineOverride } from '../tickets/entities/ticket-line-override.entity';
 import { TicketLine } from '../tickets/entities/ticket-line.entity';
 import { Ticket } from '../tickets/entities/ticket.entity';
+import { OutboxMail } from '../mail/entities/outbox-mail.entity';
 import { Payment } from '../payments/entities/payment.entity';
 import { User } from '../users/entities/user.entity';
 
@@ -65,4 +67,6 @@ export const entities = [
   InvoiceMail,
   InvoiceCheckout,
   PaymentEvent,
+  AuditEntry,
+  OutboxMail,
 ];

@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuditModule } from '../audit/audit.module';
 import { Payment } from '../payments/entities/payment.entity';
 import { Ticket } from '../tickets/entities/ticket.entity';
 import { TicketLine } from '../tickets/entities/ticket-line.entity';
@@ -30,6 +31,7 @@ import { InvoicesService } from './invoices.service';
       Ticket,
       TicketLine,
     ]),
+    AuditModule,
   ],
   controllers: [InvoicesController],
   providers: [InvoicePayLink, InvoiceReader, InvoiceLists, InvoiceDrafts, InvoicesService],

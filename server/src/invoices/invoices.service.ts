@@ -3,6 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { dueDate, formatMoney } from '@keenroute/shared';
 import { IsNull, Not, type DataSource, type EntityManager } from 'typeorm';
 import { InvoiceAccess } from '../access/invoice-access';
+import { AuditService } from '../audit/audit.service';
 import type { Actor } from '../auth/actor';
 import { DomainError } from '../common/errors/domain-error';
 import { Payment } from '../payments/entities/payment.entity';
@@ -36,6 +37,7 @@ export class InvoicesService {
     private readonly access: InvoiceAccess,
     private readonly drafts: InvoiceDrafts,
     private readonly reader: InvoiceReader,
+    private readonly audit: AuditService,
   ) {}
 
   async create(actor: Actor, dto: CreateInvoiceDto): Promise<InvoiceDto> {
@@ -90,6 +92,16 @@ export class InvoicesService {
           `Invoice ${invoice.number} has a credit note; credit what is left instead of voiding it.`,
         );
       }
+      // Written before the void itself: should either fail, neither commits.
+      await this.audit.record(
+        {
+          action: 'invoice-voided',
+          actor,
+          subject: { type: 'invoice', id },
+          detail: { number: invoice.number, from: invoice.status, totalCents: invoice.totalCents, reason: dto.reason },
+        },
+        manager,
+      );
       // The tickets go back to "ready to invoice" (still left for an invoice); their on-site payments go with them.
       await manager.getRepository(Ticket).update({ invoiceId: id }, { invoiceId: null });
       await manager.getRepository(Payment).update({ invoiceId: id, ticketId: Not(IsNull()) }, { invoiceId: null });
@@ -119,7 +131,7 @@ export class InvoicesService {
         throw new DomainError('invalid_input', message, { amountCents: [message] });
       }
       const number = await takeDocumentNumber(manager, 'CN', yearOf(this.reader.today()));
-      await manager.getRepository(CreditNote).insert({
+      const inserted = await manager.getRepository(CreditNote).insert({
         number,
         invoiceId: id,
         amountCents: dto.amountCents,
@@ -127,6 +139,22 @@ export class InvoicesService {
         refundMethod: dto.refundMethod,
         createdBy: actor.id,
       });
+      await this.audit.record(
+        {
+          action: 'credit-note-issued',
+          actor,
+          subject: { type: 'invoice', id },
+          detail: {
+            creditNoteId: (inserted.identifiers[0] as { id: string }).id,
+            number,
+            invoiceNumber: invoice.number,
+            amountCents: dto.amountCents,
+            refundMethod: dto.refundMethod,
+            reason: dto.reason,
+          },
+        },
+        manager,
+      );
       await settleInvoice(manager, invoice);
     });
     return this.reader.detail(id);

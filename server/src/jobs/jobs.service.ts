@@ -1,7 +1,7 @@
 import { Injectable, Logger, type OnApplicationBootstrap, type OnModuleDestroy } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import PgBoss from 'pg-boss';
-import { DataSource } from 'typeorm';
+import { DataSource, type EntityManager } from 'typeorm';
 import type { AppConfig } from '../config/environment';
 import { withJobsSetupLock } from './setup-lock';
 
@@ -20,6 +20,16 @@ export interface SendOptions extends QueueSettings {
   singletonKey?: string;
   singletonSeconds?: number;
   startAfter?: Date | number;
+  /** A fixed job id: pg-boss keeps one job per id, so sending the same id twice queues it once. */
+  id?: string;
+  /** Queue the job inside this transaction: it exists exactly when the caller's rows do. */
+  manager?: EntityManager;
+}
+
+export interface WorkOptions {
+  /** Jobs taken per fetch (worked one after another); pg-boss fetches once per polling interval. */
+  batchSize?: number;
+  pollingIntervalSeconds?: number;
 }
 
 export interface QueuedJob<T> {
@@ -52,6 +62,8 @@ export class JobsService implements OnApplicationBootstrap, OnModuleDestroy {
       max: 4,
       // Only an instance that works jobs turns cron schedules into jobs.
       schedule: this.workers,
+      // Maintenance is what fails (and so retries) a job whose worker died holding it, once the job's expiry passed.
+      maintenanceIntervalSeconds: config.get('JOBS_MAINTENANCE_SECONDS', { infer: true }),
     });
     this.boss.on('error', (error) => this.logger.error({ err: error }, 'background jobs error'));
   }
@@ -89,15 +101,40 @@ export class JobsService implements OnApplicationBootstrap, OnModuleDestroy {
   /** The job's id, or null when a job with the same singleton key already holds the slot. */
   async send<T extends object>(name: string, data: T, options: SendOptions = {}): Promise<string | null> {
     await this.start();
-    return this.boss.send(name, data, options);
+    const { manager, ...rest } = options;
+    if (!manager) return this.boss.send(name, data, rest);
+    const runner = manager.queryRunner;
+    if (!runner) throw new Error(`A job for ${name} was to be queued in a transaction, but the manager has none.`);
+    const db = {
+      executeSql: async (text: string, values: unknown[]) => ({
+        rows: (await runner.query(text, values, true)).records as unknown[],
+      }),
+    };
+    return this.boss.send(name, data, { ...rest, db });
   }
 
-  /** Works jobs one at a time (pg-boss hands over a batch; one job's failure must not fail its neighbours). */
-  async work<T>(name: string, handler: JobHandler<T>): Promise<void> {
+  /**
+   * Works jobs one at a time. pg-boss waits its polling interval after every fetch, so a queue that must keep up (mail)
+   * takes a batch per fetch; each job of it succeeds or fails on its own: a failed one is failed (and so retried) here,
+   * and pg-boss completes the rest, which are still active, when the batch is done.
+   */
+  async work<T>(name: string, handler: JobHandler<T>, options: WorkOptions = {}): Promise<void> {
     await this.start();
     if (!this.workers) return;
-    await this.boss.work<T>(name, { batchSize: 1 }, async (jobs) => {
-      for (const job of jobs) await handler({ id: job.id, name: job.name, data: job.data });
+    const { batchSize = 1, pollingIntervalSeconds = 2 } = options;
+    await this.boss.work<T>(name, { batchSize, pollingIntervalSeconds }, async (jobs) => {
+      if (jobs.length === 1) {
+        const [job] = jobs;
+        return handler({ id: job!.id, name: job!.name, data: job!.data });
+      }
+      for (const job of jobs) {
+        try {
+          await handler({ id: job.id, name: job.name, data: job.data });
+        } catch (error) {
+          this.logger.warn({ err: error, queue: name, jobId: job.id }, 'job failed; pg-boss retries it');
+          await this.boss.fail(name, job.id, { message: error instanceof Error ? error.message : String(error) });
+        }
+      }
     });
   }
 

@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuditModule } from '../audit/audit.module';
 import { InvoiceDocumentsModule } from '../invoices/documents/invoice-documents.module';
 import { InvoicesModule } from '../invoices/invoices.module';
 import { InvoiceCheckout } from './entities/invoice-checkout.entity';
@@ -17,7 +18,12 @@ import { StripeWebhookController } from './webhooks/stripe-webhook.controller';
 
 /** Money in against invoices: by hand, or online through the payment service's checkout and its signed webhooks. */
 @Module({
-  imports: [TypeOrmModule.forFeature([Payment, InvoiceCheckout, PaymentEvent]), InvoicesModule, InvoiceDocumentsModule],
+  imports: [
+    TypeOrmModule.forFeature([Payment, InvoiceCheckout, PaymentEvent]),
+    InvoicesModule,
+    InvoiceDocumentsModule,
+    AuditModule,
+  ],
   controllers: [PublicInvoicesController, StripeWebhookController, InvoicePaymentsController],
   providers: [
     stripeClientProvider,

@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuditModule } from '../audit/audit.module';
 import { CustomersModule } from '../customers/customers.module';
 import { ShearsModule } from '../shears/shears.module';
 import { CheckInController } from './check-in.controller';
@@ -19,7 +20,12 @@ import { TicketsService } from './tickets.service';
 import { WalkUpService } from './walk-up.service';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([Ticket, TicketLine, TicketLineOverride, Payment]), ShearsModule, CustomersModule],
+  imports: [
+    TypeOrmModule.forFeature([Ticket, TicketLine, TicketLineOverride, Payment]),
+    ShearsModule,
+    CustomersModule,
+    AuditModule,
+  ],
   controllers: [TicketsController, TicketPhotosController, CheckInController],
   providers: [
     TicketsService,

@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { RegistryAccess } from '../access/registry-access';
 import type { TicketAccess } from '../access/ticket-access';
+import type { AuditRecord, AuditService } from '../audit/audit.service';
 import type { Actor } from '../auth/actor';
 import { DomainError } from '../common/errors/domain-error';
 import { expectedPairs } from './check-in.service';
@@ -55,6 +56,14 @@ function setUp(ticket: Partial<Ticket>, line: Partial<TicketLine>, paymentCount 
     },
   } as unknown as TicketWriter;
   const reader = { detail: (id: string) => Promise.resolve({ id }) } as unknown as TicketReader;
+  const logged: { entry: AuditRecord; manager: unknown }[] = [];
+  const auditLog = {
+    record: (entry: AuditRecord, inTransaction: unknown) => {
+      calls.push('audit log');
+      logged.push({ entry, manager: inTransaction });
+      return Promise.resolve();
+    },
+  } as unknown as AuditService;
   const sut = new TicketsService(
     dataSource as unknown as DataSource,
     access,
@@ -62,8 +71,9 @@ function setUp(ticket: Partial<Ticket>, line: Partial<TicketLine>, paymentCount 
     writer,
     reader,
     {} as ShearsService,
+    auditLog,
   );
-  return { sut, calls, audit, lineChanges, access };
+  return { sut, calls, audit, lineChanges, access, logged, manager };
 }
 
 const openTicket: Partial<Ticket> = { id: 'ticket-1', status: 'open', settlement: 'unpaid' };
@@ -78,10 +88,25 @@ const pricedLine: Partial<TicketLine> = {
 
 describe('TicketsService.override', () => {
   it('asks for the override right, keeps an audit row from the price in force, then prices again', async () => {
-    const { sut, calls, audit, lineChanges, access } = setUp(openTicket, { ...pricedLine, overrideCents: 3500 });
+    const { sut, calls, audit, lineChanges, access, logged, manager } = setUp(openTicket, {
+      ...pricedLine,
+      overrideCents: 3500,
+    });
     await sut.override(office, 'ticket-1', 'line-1', { cents: 3000, reason: 'Regular shop' });
     expect(access.requireTicket).toHaveBeenCalledWith(office, 'ticket-1', 'override');
-    expect(calls).toEqual(['audit', 'update line', 'reprice']);
+    expect(calls).toEqual(['audit', 'audit log', 'update line', 'reprice']);
+    // The owner's log entry is written with the transaction's manager, so it commits or rolls back with the price.
+    expect(logged).toEqual([
+      {
+        entry: {
+          action: 'price-override',
+          actor: office,
+          subject: { type: 'ticket', id: 'ticket-1' },
+          detail: { lineId: 'line-1', shearId: 'shear-1', fromCents: 3500, toCents: 3000, reason: 'Regular shop' },
+        },
+        manager,
+      },
+    ]);
     expect(audit).toEqual([
       {
         ticketId: 'ticket-1',

@@ -3,6 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { normalizeTagCode } from '@keenroute/shared';
 import type { DataSource, EntityManager } from 'typeorm';
 import { RegistryAccess } from '../access/registry-access';
+import { AuditService } from '../audit/audit.service';
 import { TicketAccess } from '../access/ticket-access';
 import type { Actor } from '../auth/actor';
 import { DomainError, notFound } from '../common/errors/domain-error';
@@ -29,6 +30,7 @@ export class TicketsService {
     private readonly writer: TicketWriter,
     private readonly reader: TicketReader,
     private readonly shears: ShearsService,
+    private readonly audit: AuditService,
   ) {}
 
   async create(actor: Actor, dto: CreateTicketDto): Promise<TicketDto> {
@@ -136,15 +138,25 @@ export class TicketsService {
         throw new DomainError('conflict', 'Money has been taken or an invoice is due on this ticket: its prices stay.');
       }
       const line = await this.lineOf(manager, ticket, lineId);
+      const fromCents = line.overrideCents ?? line.priceCents;
       await manager.getRepository(TicketLineOverride).insert({
         ticketId: ticket.id,
         ticketLineId: line.id,
         shearId: line.shearId,
-        fromCents: line.overrideCents ?? line.priceCents,
+        fromCents,
         toCents: dto.cents,
         reason: dto.reason,
         byUser: actor.id,
       });
+      await this.audit.record(
+        {
+          action: 'price-override',
+          actor,
+          subject: { type: 'ticket', id: ticket.id },
+          detail: { lineId: line.id, shearId: line.shearId, fromCents, toCents: dto.cents, reason: dto.reason },
+        },
+        manager,
+      );
       await manager.getRepository(TicketLine).update(line.id, { overrideCents: dto.cents, overrideReason: dto.reason });
       await this.writer.reprice(manager, ticket);
     });

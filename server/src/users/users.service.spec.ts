@@ -1,10 +1,11 @@
 import type { ConfigService } from '@nestjs/config';
 import type { Repository } from 'typeorm';
+import type { AuditRecord, AuditService } from '../audit/audit.service';
 import type { Actor } from '../auth/actor';
 import type { RefreshTokensService } from '../auth/refresh-tokens.service';
 import type { UserTokensService } from '../auth/user-tokens.service';
 import type { AppConfig } from '../config/environment';
-import type { MailService } from '../mail/mail.service';
+import type { MailOutbox } from '../mail/mail-outbox';
 import type { User } from './entities/user.entity';
 import { UsersService } from './users.service';
 
@@ -14,35 +15,64 @@ const person = (role: User['role'], id = `${role}-1`): User =>
 describe('UsersService.update', () => {
   let stored: User;
   let revokeAllFor: jest.Mock;
+  let logged: AuditRecord[];
   let sut: UsersService;
 
   function setUp(target: User) {
     stored = target;
     revokeAllFor = jest.fn().mockResolvedValue(undefined);
-    const users = {
+    logged = [];
+    const repository = {
       findOneBy: jest.fn().mockImplementation(() => Promise.resolve(stored)),
-      save: jest.fn().mockImplementation((user: User) => Promise.resolve(user)),
+      save: jest.fn().mockImplementation((user: User) => Promise.resolve({ ...user })),
+    };
+    const manager = { getRepository: () => repository };
+    const users = {
+      ...repository,
+      manager: { transaction: (work: (m: typeof manager) => Promise<unknown>) => work(manager) },
     } as unknown as Repository<User>;
+    const audit = {
+      record: (entry: AuditRecord) => {
+        logged.push(entry);
+        return Promise.resolve();
+      },
+    } as unknown as AuditService;
     sut = new UsersService(
       users,
       {} as UserTokensService,
       { revokeAllFor } as unknown as RefreshTokensService,
-      {} as MailService,
+      {} as MailOutbox,
       {} as ConfigService<AppConfig, true>,
+      audit,
     );
   }
 
   const office: Actor = { id: 'office-1', email: 'o@x.test', name: 'Office', role: 'office' };
 
-  it('changes a role the actor may give', async () => {
+  it('changes a role the actor may give, and logs from and to', async () => {
     setUp(person('client'));
     await expect(sut.update(office, 'client-1', { role: 'sharpener' })).resolves.toMatchObject({ role: 'sharpener' });
+    expect(logged).toEqual([
+      {
+        action: 'role-changed',
+        actor: office,
+        subject: { type: 'user', id: 'client-1' },
+        detail: { email: 'client-1@x.test', from: 'client', to: 'sharpener' },
+      },
+    ]);
   });
 
-  it('revokes every session of a deactivated user', async () => {
+  it('revokes every session of a deactivated user, and logs it', async () => {
     setUp(person('sharpener'));
     await sut.update(office, 'sharpener-1', { active: false });
     expect(revokeAllFor).toHaveBeenCalledWith('sharpener-1');
+    expect(logged.map((entry) => entry.action)).toEqual(['user-deactivated']);
+  });
+
+  it('logs nothing when only the name changes', async () => {
+    setUp(person('sharpener'));
+    await sut.update(office, 'sharpener-1', { name: 'Renamed', role: 'sharpener', active: true });
+    expect(logged).toEqual([]);
   });
 
   it('does not let the office change an owner or make one', async () => {

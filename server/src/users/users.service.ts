@@ -1,15 +1,17 @@
+import { randomUUID } from 'node:crypto';
 import { Injectable } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectRepository } from '@nestjs/typeorm';
 import { canAssignRole } from '@keenroute/shared';
 import { EntityManager, IsNull, Not, Repository } from 'typeorm';
+import { AuditService } from '../audit/audit.service';
 import type { Actor } from '../auth/actor';
 import { RefreshTokensService } from '../auth/refresh-tokens.service';
 import { UserTokensService } from '../auth/user-tokens.service';
 import { likePattern } from '../common/pagination.dto';
 import { DomainError, notFound } from '../common/errors/domain-error';
 import type { AppConfig } from '../config/environment';
-import { MailService } from '../mail/mail.service';
+import { MailOutbox } from '../mail/mail-outbox';
 import { invitationMail } from '../mail/templates/account-links';
 import type { InviteUserDto } from './dto/invite-user.dto';
 import type { ListUsersQueryDto } from './dto/list-users-query.dto';
@@ -24,8 +26,9 @@ export class UsersService {
     @InjectRepository(User) private readonly users: Repository<User>,
     private readonly userTokens: UserTokensService,
     private readonly refreshTokens: RefreshTokensService,
-    private readonly mail: MailService,
+    private readonly mail: MailOutbox,
     private readonly config: ConfigService<AppConfig, true>,
+    private readonly audit: AuditService,
   ) {}
 
   async list(query: ListUsersQueryDto): Promise<{ items: User[]; total: number }> {
@@ -76,6 +79,15 @@ export class UsersService {
         .save(
           manager.getRepository(User).create({ email: dto.email, name: dto.name, role: dto.role, passwordHash: null }),
         );
+      await this.audit.record(
+        {
+          action: 'user-invited',
+          actor,
+          subject: { type: 'user', id: created.id },
+          detail: { email: created.email, role: created.role },
+        },
+        manager,
+      );
       return { user: created, secret: await this.userTokens.issue(created.id, 'invite', manager) };
     });
     await this.sendInvitation(actor, user, secret);
@@ -100,12 +112,32 @@ export class UsersService {
     if (dto.role && !canAssignRole(actor.role, dto.role)) {
       throw new DomainError('forbidden', `Your role may not make a user ${dto.role}.`);
     }
+    const before = { role: user.role, active: user.active };
     Object.assign(user, {
       name: dto.name ?? user.name,
       role: dto.role ?? user.role,
       active: dto.active ?? user.active,
     });
-    const saved = await this.users.save(user);
+    const saved = await this.users.manager.transaction(async (manager) => {
+      const changed = await manager.getRepository(User).save(user);
+      const subject = { type: 'user' as const, id: user.id };
+      if (changed.role !== before.role) {
+        await this.audit.record(
+          {
+            action: 'role-changed',
+            actor,
+            subject,
+            detail: { email: user.email, from: before.role, to: changed.role },
+          },
+          manager,
+        );
+      }
+      if (changed.active !== before.active) {
+        const action = changed.active ? 'user-reactivated' : 'user-deactivated';
+        await this.audit.record({ action, actor, subject, detail: { email: user.email, role: changed.role } }, manager);
+      }
+      return changed;
+    });
     if (dto.active === false) await this.refreshTokens.revokeAllFor(user.id);
     return saved;
   }
@@ -114,8 +146,8 @@ export class UsersService {
     await manager.getRepository(User).update({ id: userId }, { passwordHash });
   }
 
-  async recordSignIn(userId: string): Promise<void> {
-    await this.users.update({ id: userId }, { lastSignInAt: new Date() });
+  async recordSignIn(userId: string, manager: EntityManager = this.users.manager): Promise<void> {
+    await manager.getRepository(User).update({ id: userId }, { lastSignInAt: new Date() });
   }
 
   /** Office runs the team but not the owners: only an owner changes an owner. */
@@ -127,6 +159,12 @@ export class UsersService {
 
   private async sendInvitation(actor: Actor, user: User, secret: string): Promise<void> {
     const link = `${this.config.get('APP_URL', { infer: true })}/set-password?token=${secret}`;
-    await this.mail.send(invitationMail(user.email, user.name, actor.name, link));
+    const key = `invitation:${randomUUID()}`;
+    await this.mail.queue({
+      ...invitationMail(user.email, user.name, actor.name, link),
+      key,
+      topic: 'account',
+      refId: user.id,
+    });
   }
 }

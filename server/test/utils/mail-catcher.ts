@@ -5,8 +5,11 @@ export interface CaughtMail {
   text: string;
 }
 
-/** Waits until the local mail catcher holds a message to `to` whose subject matches, and returns it. */
-export async function waitForMail(to: string, subject: RegExp, timeoutMs = 5000): Promise<CaughtMail> {
+/**
+ * Waits until the local mail catcher holds a message to `to` whose subject matches, and returns it. E-mail goes out
+ * through the job queue (src/mail), so the wait covers a worker's polling interval and a PDF drawn on a busy machine.
+ */
+export async function waitForMail(to: string, subject: RegExp, timeoutMs = 20_000): Promise<CaughtMail> {
   const deadline = Date.now() + timeoutMs;
   for (;;) {
     const found = (await mailTo(to)).find((mail) => subject.test(mail.subject));

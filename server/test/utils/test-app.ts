@@ -19,6 +19,9 @@ export async function createTestApp(): Promise<INestApplication<App>> {
   const app = moduleRef.createNestApplication<INestApplication<App>>({ rawBody: true, logger: false });
   configureApp(app);
   await app.init();
+  // The rate limits count in the database for every instance alike; each test app starts with no attempts counted,
+  // as one fresh server would, so one test file's sign-ins and bookings do not use up the next one's.
+  await app.get(DataSource).query('DELETE FROM rate_limit_hits');
   return app;
 }
 

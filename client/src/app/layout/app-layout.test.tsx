@@ -24,6 +24,7 @@ const EXPECTED_NAV: Record<Role, string[]> = {
     'Team',
     'Rates',
     'Business profile',
+    'Audit log',
     'Outbox',
   ],
   office: [

@@ -180,7 +180,8 @@ export interface InvoiceMail {
   kind: 'invoice' | 'reminder' | 'receipt' | 'statement';
   toEmail: string;
   subject: string;
-  status: 'sent' | 'failed';
+  /** 'queued' until the mail queue has tried it; the error then says why a try failed. */
+  status: 'queued' | 'sent' | 'failed';
   error: string | null;
   createdAt: string;
 }

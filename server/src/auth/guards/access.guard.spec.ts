@@ -1,4 +1,4 @@
-import { ExecutionContext, ForbiddenException } from '@nestjs/common';
+import { ExecutionContext, ForbiddenException, UnauthorizedException } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
 import { AuthGuard } from '@nestjs/passport';
 import type { Role } from '@keenroute/shared';
@@ -44,5 +44,11 @@ describe('AccessGuard', () => {
 
   it('refuses everyone on a route that declares no roles', async () => {
     await expect(sut.canActivate(contextFor({}, 'owner'))).rejects.toBeInstanceOf(ForbiddenException);
+  });
+
+  it('answers 401 for no user, but lets a failed user look-up (the database down) through as itself', () => {
+    expect(() => sut.handleRequest(null, false)).toThrow(UnauthorizedException);
+    const down = Object.assign(new Error('connect ECONNREFUSED 127.0.0.1:5432'), { code: 'ECONNREFUSED' });
+    expect(() => sut.handleRequest(down, false)).toThrow(down);
   });
 });

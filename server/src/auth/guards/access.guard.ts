@@ -28,6 +28,9 @@ export class AccessGuard extends AuthGuard('jwt') {
   }
 
   override handleRequest<T>(error: unknown, user: T | false): T {
+    // A token passport-jwt refuses arrives as `info`, not `error`; an error is the user look-up failing (the database
+    // down), which must stay a 503 instead of a 401 that would send everyone to sign in again.
+    if (error instanceof Error) throw error;
     if (error || !user) throw new UnauthorizedException('Sign in to continue.');
     return user;
   }

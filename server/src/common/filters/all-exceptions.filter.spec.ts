@@ -67,4 +67,37 @@ describe('AllExceptionsFilter', () => {
     expect(sent().status).toBe(503);
     expect(sent().body.message).toMatch(/database is not reachable/);
   });
+
+  it('answers 503 when PostgreSQL went away in the middle of a transaction', () => {
+    // TypeORM releases a transaction's connection when PostgreSQL ends it; the transaction's next query says so.
+    const released = Object.assign(new Error('Query runner already released. Cannot run queries anymore.'), {
+      name: 'QueryRunnerAlreadyReleasedError',
+    });
+    for (const error of [released, Object.assign(new Error('terminating connection'), { code: '57P01' })]) {
+      const { host, sent } = hostCapturing();
+      sut.catch(error, host);
+      expect(sent().status).toBe(503);
+    }
+  });
+
+  it("answers body-parser's over-size error with its 413, and never passes on a 5xx from middleware as the caller's", () => {
+    const tooLarge = Object.assign(new Error('request entity too large'), {
+      status: 413,
+      expose: true,
+      type: 'entity.too.large',
+    });
+    const { host, sent } = hostCapturing();
+    sut.catch(tooLarge, host);
+    expect(sent()).toMatchObject({ status: 413, body: { message: 'The request is too large.' } });
+    const hidden = hostCapturing();
+    sut.catch(Object.assign(new Error('socket hang up'), { status: 502, expose: false }), hidden.host);
+    expect(hidden.sent().status).toBe(500);
+  });
+
+  it('answers 400 when PostgreSQL refuses text it cannot store', () => {
+    const { host, sent } = hostCapturing();
+    sut.catch(Object.assign(new Error('invalid byte sequence for encoding "UTF8": 0x00'), { code: '22021' }), host);
+    expect(sent()).toMatchObject({ status: 400, body: { message: 'Text cannot contain NUL characters.' } });
+    expect(JSON.stringify(sent().body)).not.toMatch(/UTF8|0x00/);
+  });
 });

@@ -56,6 +56,12 @@ export class AllExceptionsFilter implements ExceptionFilter {
       const fields = payload.fields as Record<string, string[]> | undefined;
       return { statusCode, error: reason(statusCode), message, fields };
     }
+    const client = clientHttpError(exception);
+    if (client) return { statusCode: client.status, error: reason(client.status), message: client.message };
+    if (isUnstorableText(exception)) {
+      // The validation pipe refuses NUL and broken Unicode; this catches text that reached the database another way.
+      return { statusCode: HttpStatus.BAD_REQUEST, error: reason(400), message: 'Text cannot contain NUL characters.' };
+    }
     if (isDatabaseUnavailable(exception)) {
       return {
         statusCode: HttpStatus.SERVICE_UNAVAILABLE,
@@ -82,14 +88,35 @@ function reason(status: number): string {
     : 'Error';
 }
 
+const CLIENT_MESSAGES: Partial<Record<number, string>> = {
+  [HttpStatus.PAYLOAD_TOO_LARGE]: 'The request is too large.',
+  [HttpStatus.UNSUPPORTED_MEDIA_TYPE]: 'This content type is not accepted here.',
+};
+
+/** Errors Express middleware raises the http-errors way (body-parser's 413 above all): a 4xx the caller can fix. */
+function clientHttpError(exception: unknown): { status: number; message: string } | undefined {
+  if (typeof exception !== 'object' || exception === null) return undefined;
+  const { status, expose, message } = exception as { status?: unknown; expose?: unknown; message?: unknown };
+  if (typeof status !== 'number' || status < 400 || status > 499 || expose !== true) return undefined;
+  return { status, message: CLIENT_MESSAGES[status] ?? (typeof message === 'string' ? message : reason(status)) };
+}
+
+/** PostgreSQL refusing text it cannot store: NUL characters (22021) or bytes with no place in the encoding (22P05). */
+function isUnstorableText(exception: unknown): boolean {
+  // TypeORM's QueryFailedError copies the driver's fields, code included, onto itself.
+  const code = (exception as { code?: unknown } | null)?.code;
+  return code === '22021' || code === '22P05';
+}
+
 const UNAVAILABLE = new Set(['ECONNREFUSED', 'ECONNRESET', '57P01', '57P03', 'ETIMEDOUT']);
 
 function isDatabaseUnavailable(exception: unknown): boolean {
   if (typeof exception !== 'object' || exception === null) return false;
-  const code = (exception as { code?: unknown }).code;
-  const message = (exception as { message?: unknown }).message;
+  const { code, message, name } = exception as { code?: unknown; message?: unknown; name?: unknown };
   return (
     (typeof code === 'string' && UNAVAILABLE.has(code)) ||
+    // TypeORM lets go of a transaction's connection that PostgreSQL ended; the transaction's next query throws this.
+    name === 'QueryRunnerAlreadyReleasedError' ||
     (typeof message === 'string' && /Connection terminated|timeout exceeded when trying to connect/.test(message))
   );
 }

@@ -7,7 +7,10 @@ import { CreateBookings1764979200000 } from './1764979200000-CreateBookings';
 import { CreateTickets1764979200001 } from './1764979200001-CreateTickets';
 import { CreateInvoices1765065600000 } from './1765065600000-CreateInvoices';
 import { AddReportIndexes1765152000000 } from './1765152000000-AddReportIndexes';
+import { CreateAuditEntries1765238400000 } from './1765238400000-CreateAuditEntries';
 import { AddTicketShearCount1765324800000 } from './1765324800000-AddTicketShearCount';
+import { CreateRateLimitHits1765411200000 } from './1765411200000-CreateRateLimitHits';
+import { CreateMailOutbox1765501200000 } from './1765501200000-CreateMailOutbox';
 
 /** Listed explicitly, oldest first, so the CLI, the app and jest load the same migrations without globs. */
 export const migrations = [
@@ -20,5 +23,8 @@ export const migrations = [
   CreateTickets1764979200001,
   CreateInvoices1765065600000,
   AddReportIndexes1765152000000,
+  CreateAuditEntries1765238400000,
   AddTicketShearCount1765324800000,
+  CreateRateLimitHits1765411200000,
+  CreateMailOutbox1765501200000,
 ];

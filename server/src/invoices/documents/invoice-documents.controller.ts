@@ -9,7 +9,7 @@ import {
   Post,
   StreamableFile,
 } from '@nestjs/common';
-import { ApiBadGatewayResponse, ApiBearerAuth, ApiOkResponse, ApiProduces, ApiTags } from '@nestjs/swagger';
+import { ApiAcceptedResponse, ApiBearerAuth, ApiOkResponse, ApiProduces, ApiTags } from '@nestjs/swagger';
 import type { Actor } from '../../auth/actor';
 import { CurrentUser } from '../../auth/decorators/current-user.decorator';
 import { Roles } from '../../auth/decorators/roles.decorator';
@@ -38,12 +38,11 @@ export class InvoiceDocumentsController {
     return pdfResponse(await this.documents.pdf(actor, id), 'attachment');
   }
 
-  /** Issues a draft first; the same route again is a resend. */
+  /** Issues a draft first; the same route again is a resend. 202: the e-mail is queued, the send log tells how it went. */
   @Roles('owner', 'office')
   @Post('send')
-  @HttpCode(HttpStatus.OK)
-  @ApiOkResponse({ type: InvoiceDto })
-  @ApiBadGatewayResponse({ description: 'The mail relay refused the message (the try is in the send log)' })
+  @HttpCode(HttpStatus.ACCEPTED)
+  @ApiAcceptedResponse({ type: InvoiceDto, description: "Issued, and the e-mail queued ('queued' in the send log)" })
   send(
     @CurrentUser() actor: Actor,
     @Param('id', ParseUUIDPipe) id: string,

@@ -1,6 +1,6 @@
-import { BadGatewayException, Injectable } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { IsNull, Repository } from 'typeorm';
+import { Repository } from 'typeorm';
 import { InvoiceAccess } from '../../access/invoice-access';
 import type { Actor } from '../../auth/actor';
 import { DomainError, notFound } from '../../common/errors/domain-error';
@@ -11,6 +11,7 @@ import { InvoicePayLink } from '../invoice-pay-link';
 import { InvoiceReader } from '../invoice-reader';
 import { InvoicesService } from '../invoices.service';
 import type { InvoiceMailDto, SendInvoiceDto } from './dto/invoice-documents.dto';
+import { InvoiceDocumentLoader } from './invoice-document';
 import { invoiceMail } from './invoice-mail';
 import { InvoiceMailer } from './invoice-mailer';
 import { invoicePdfFileName, InvoicePdfService } from './invoice-pdf.service';
@@ -38,6 +39,7 @@ export class InvoiceDocumentsService {
     private readonly reader: InvoiceReader,
     private readonly payLink: InvoicePayLink,
     private readonly pdfs: InvoicePdfService,
+    private readonly loader: InvoiceDocumentLoader,
     private readonly mailer: InvoiceMailer,
   ) {}
 
@@ -55,8 +57,8 @@ export class InvoiceDocumentsService {
   }
 
   /**
-   * E-mails the invoice with its PDF (a draft is issued first, and stays issued whatever the mail relay says). Every
-   * try is written to the send log; a refused delivery answers 502 with the relay's reason.
+   * Queues the invoice e-mail with its PDF (a draft is issued first, and stays issued whatever the mail relay says).
+   * The send log says 'queued' at once, then 'sent' or 'failed'; the invoice counts as sent on once it was delivered.
    */
   async send(actor: Actor, invoiceId: string, dto: SendInvoiceDto): Promise<InvoiceDto> {
     let invoice = await this.access.requireInvoice(actor, invoiceId, 'manage');
@@ -72,24 +74,16 @@ export class InvoiceDocumentsService {
     const to = dto.to ?? invoice.billToEmail;
     if (!to) throw noAddress(true);
 
-    const { document, pdf, fileName } = await this.pdfs.renderWithDocument(invoiceId);
-    const text = invoiceMail(document);
-    const logged = await this.mailer.sendLogged({
+    // The text is written now, from the issued invoice; the PDF is drawn from the same rows when the mail goes out.
+    const document = await this.loader.load(invoiceId);
+    await this.mailer.queueLogged({
       invoiceId,
       kind: 'invoice',
       to,
-      ...text,
-      attachments: [{ filename: fileName, content: pdf, contentType: 'application/pdf' }],
+      ...invoiceMail(document),
+      attachInvoicePdf: true,
       sentBy: actor.id,
     });
-    if (logged.status === 'failed') {
-      throw new BadGatewayException(
-        `The e-mail to ${to} could not be sent (${logged.error}). Invoice ${invoice.number} is issued; ` +
-          'try sending it again in a while.',
-      );
-    }
-    // Only the first successful send counts as "sent on"; a resend leaves the date alone.
-    await this.invoices.update({ id: invoiceId, sentAt: IsNull() }, { sentAt: logged.createdAt });
     return this.reader.detail(invoiceId);
   }
 

@@ -3,7 +3,7 @@ import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeor
 export const INVOICE_MAIL_KINDS = ['invoice', 'reminder', 'receipt', 'statement'] as const;
 export type InvoiceMailKind = (typeof INVOICE_MAIL_KINDS)[number];
 
-/** The send log: every invoice, reminder, receipt and statement e-mail tried, and how it went. */
+/** The send log: every invoice, reminder, receipt and statement e-mail tried, and how it went (or that it waits). */
 @Entity({ name: 'invoice_mails' })
 export class InvoiceMail {
   @PrimaryGeneratedColumn('uuid')
@@ -25,7 +25,7 @@ export class InvoiceMail {
   subject: string;
 
   @Column({ type: 'varchar', length: 16 })
-  status: 'sent' | 'failed';
+  status: 'queued' | 'sent' | 'failed';
 
   @Column({ type: 'varchar', length: 500, nullable: true })
   error: string | null;

@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
 import { InvoiceAccess } from '../../access/invoice-access';
+import { AuditService } from '../../audit/audit.service';
 import type { Actor } from '../../auth/actor';
 import type { InvoiceDto } from '../../invoices/dto/invoice-response.dto';
 import { lockInvoice, settleInvoice } from '../../invoices/invoice-ledger';
@@ -19,6 +20,7 @@ export class InvoicePaymentsService {
     private readonly access: InvoiceAccess,
     private readonly reader: InvoiceReader,
     private readonly receipts: PaymentReceipts,
+    private readonly audit: AuditService,
   ) {}
 
   async record(actor: Actor, invoiceId: string, dto: RecordInvoicePaymentDto): Promise<InvoiceDto> {
@@ -36,8 +38,24 @@ export class InvoicePaymentsService {
         reference,
         recordedBy: actor.id,
       });
+      const paymentId = (inserted.identifiers[0] as { id: string }).id;
+      await this.audit.record(
+        {
+          action: 'payment-recorded',
+          actor,
+          subject: { type: 'invoice', id: invoiceId },
+          detail: {
+            paymentId,
+            invoiceNumber: invoice.number,
+            method: dto.method,
+            amountCents: dto.amountCents,
+            reference,
+          },
+        },
+        manager,
+      );
       await settleInvoice(manager, invoice);
-      return (inserted.identifiers[0] as { id: string }).id;
+      return paymentId;
     });
     // After the commit: no receipt for money a rollback took back; a failed send is in the send log, the payment stands.
     if (dto.sendReceipt) await this.receipts.sendQuietly(paymentId, actor.id);

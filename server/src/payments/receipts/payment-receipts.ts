@@ -12,8 +12,8 @@ import { owedCents } from '../online/public-invoices.service';
 import { receiptMail } from './receipt-mail';
 
 /**
- * E-mails the receipt for one invoice payment to the invoice's bill-to address, through the send log. Called only after
- * the payment's transaction has committed; receipt_sent_at is set when the relay took the message.
+ * Queues the receipt for one invoice payment to the invoice's bill-to address, through the send log. Called only after
+ * the payment's transaction has committed; receipt_sent_at is set when the relay takes the message (InvoiceMailer).
  */
 @Injectable()
 export class PaymentReceipts {
@@ -29,7 +29,7 @@ export class PaymentReceipts {
     this.timeZone = config.get('BUSINESS_TIME_ZONE', { infer: true });
   }
 
-  /** True when the receipt went out; false when there is nowhere to send it or the relay refused it. */
+  /** True when the receipt is queued; false when there is nowhere to send it. */
   async send(paymentId: string, sentBy: string | null = null): Promise<boolean> {
     const payment = await this.dataSource.getRepository(Payment).findOneBy({ id: paymentId });
     if (!payment?.invoiceId) return false;
@@ -54,7 +54,7 @@ export class PaymentReceipts {
       balanceCents: balance,
       payUrl: balance > 0 && invoice.status !== 'void' ? this.payLink.url(invoice.id) : null,
     });
-    const logged = await this.mailer.sendLogged({
+    await this.mailer.queueLogged({
       invoiceId: invoice.id,
       paymentId,
       kind: 'receipt',
@@ -62,8 +62,6 @@ export class PaymentReceipts {
       ...mail,
       sentBy,
     });
-    if (logged.status !== 'sent') return false;
-    await this.dataSource.getRepository(Payment).update(paymentId, { receiptSentAt: new Date() });
     return true;
   }
 

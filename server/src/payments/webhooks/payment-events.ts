@@ -2,6 +2,7 @@ import { Injectable, Logger } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource, EntityManager } from 'typeorm';
 import type Stripe from 'stripe';
+import { AuditService } from '../../audit/audit.service';
 import { lockInvoice, settleInvoice } from '../../invoices/invoice-ledger';
 import { Payment } from '../entities/payment.entity';
 
@@ -23,7 +24,10 @@ const REFERENCE_LENGTH = 60;
 export class PaymentEvents {
   private readonly logger = new Logger(PaymentEvents.name);
 
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly audit: AuditService,
+  ) {}
 
   handle(event: Stripe.Event): Promise<EventOutcome> {
     return this.dataSource.transaction(async (manager) => {
@@ -97,7 +101,18 @@ export class PaymentEvents {
       .returning(['id'])
       .execute();
     const paymentId = (inserted.raw as { id: string }[])[0]?.id ?? null;
-    if (paymentId) await settleInvoice(manager, invoice);
+    if (!paymentId) return null;
+    // No actor: the payment service reported it, through a signed event.
+    await this.audit.record(
+      {
+        action: 'payment-recorded',
+        actor: null,
+        subject: { type: 'invoice', id: invoiceId },
+        detail: { paymentId, invoiceNumber: invoice.number, method: 'online', amountCents, reference: externalId },
+      },
+      manager,
+    );
+    await settleInvoice(manager, invoice);
     return paymentId;
   }
 

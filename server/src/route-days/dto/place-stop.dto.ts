@@ -1,5 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsBoolean, IsInt, IsOptional, IsUUID, Max, Min } from 'class-validator';
+import { PG_INTEGER_MAX } from '../../common/validation/limits';
 
 export class PlaceStopDto {
   @ApiProperty({ format: 'uuid' })
@@ -15,6 +16,7 @@ export class PlaceStopDto {
   @ApiPropertyOptional({ description: "The day's version as last read; a newer day refuses the change (409)" })
   @IsOptional()
   @IsInt()
+  @Max(PG_INTEGER_MAX)
   version?: number;
 }
 

@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsOptional, IsUUID, ValidateNested } from 'class-validator';
+import { IsDefined, IsOptional, IsUUID, ValidateNested } from 'class-validator';
 import { CreateCustomerDto } from '../../customers/dto/create-customer.dto';
 
 /** A walk-up at a stop: someone not yet a customer hands over shears; the customer is registered on the spot. */
@@ -15,6 +15,8 @@ export class WalkUpDto {
   routeDayId?: string;
 
   @ApiProperty({ type: CreateCustomerDto, description: 'The new customer (their stop is this stop)' })
+  // @ValidateNested() alone lets a missing customer through to the service.
+  @IsDefined({ message: 'customer is the new customer: at least a name.' })
   @ValidateNested()
   @Type(() => CreateCustomerDto)
   customer: CreateCustomerDto;

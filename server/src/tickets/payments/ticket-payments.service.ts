@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
 import { TicketAccess } from '../../access/ticket-access';
+import { AuditService } from '../../audit/audit.service';
 import type { Actor } from '../../auth/actor';
 import type { TicketDto } from '../dto/ticket-response.dto';
 import { Ticket } from '../entities/ticket.entity';
@@ -19,6 +20,7 @@ export class TicketPaymentsService {
     private readonly access: TicketAccess,
     private readonly writer: TicketWriter,
     private readonly reader: TicketReader,
+    private readonly audit: AuditService,
   ) {}
 
   async record(actor: Actor, ticketId: string, dto: RecordPaymentDto): Promise<TicketDto> {
@@ -29,13 +31,23 @@ export class TicketPaymentsService {
       const paid = paidCents(await payments.findBy({ ticketId: ticket.id }));
       const reference = dto.method === 'cash' ? '' : (dto.reference ?? '');
       const settlement = checkPayment(ticket, paid, { method: dto.method, amountCents: dto.amountCents, reference });
-      await payments.insert({
+      const inserted = await payments.insert({
         ticketId: ticket.id,
         method: dto.method,
         amountCents: dto.amountCents,
         reference,
         recordedBy: actor.id,
       });
+      const paymentId = (inserted.identifiers[0] as { id: string }).id;
+      await this.audit.record(
+        {
+          action: 'payment-recorded',
+          actor,
+          subject: { type: 'ticket', id: ticket.id },
+          detail: { paymentId, method: dto.method, amountCents: dto.amountCents, reference },
+        },
+        manager,
+      );
       if (settlement !== ticket.settlement) await manager.getRepository(Ticket).update(ticket.id, { settlement });
     });
     return this.reader.detail(ticketId);

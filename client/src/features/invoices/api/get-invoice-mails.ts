@@ -8,8 +8,15 @@ export function getInvoiceMails(id: string, signal?: AbortSignal): Promise<Invoi
   return api.get<InvoiceMail[]>(`${invoicePath(id)}/mails`, { signal });
 }
 
+/** While a mail waits in the server's queue, the log is read again every few seconds until it went or failed. */
+const QUEUED_POLL_MS = 3000;
+
 export function getInvoiceMailsQueryOptions(id: string) {
-  return queryOptions({ queryKey: invoiceKeys.mails(id), queryFn: ({ signal }) => getInvoiceMails(id, signal) });
+  return queryOptions({
+    queryKey: invoiceKeys.mails(id),
+    queryFn: ({ signal }) => getInvoiceMails(id, signal),
+    refetchInterval: (query) => (query.state.data?.some((mail) => mail.status === 'queued') ? QUEUED_POLL_MS : false),
+  });
 }
 
 export function useInvoiceMails(id: string, options: { enabled?: boolean } = {}) {

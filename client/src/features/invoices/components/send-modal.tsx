@@ -31,7 +31,8 @@ export function SendModal({
     }
     setProblem(null);
     setSending(true);
-    const ok = await run({ kind: 'send', to: address }, resend ? 'Sent again' : 'Invoice sent');
+    // The server queues the e-mail; the send log shows when it went.
+    const ok = await run({ kind: 'send', to: address }, resend ? 'Queued to send again' : 'Invoice queued to send');
     setSending(false);
     if (ok) onClose();
   };

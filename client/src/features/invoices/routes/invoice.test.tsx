@@ -73,6 +73,23 @@ describe('an invoice', { timeout: 30_000 }, () => {
     expect(log).toHaveTextContent('Mailbox unavailable');
   });
 
+  it('shows a queued e-mail as queued, and reads the log again until it went', async () => {
+    let status: InvoiceMail['status'] = 'queued';
+    const server = mockApi({
+      'GET /api/invoices/inv-1': { status: 200, body: invoice() },
+      'GET /api/invoices/inv-1/mails': () => ({
+        status: 200,
+        body: [{ ...MAILS[0]!, kind: 'invoice', status, error: null }],
+      }),
+    });
+    renderInvoice();
+    const log = await screen.findByRole('list', { name: 'Send log' });
+    expect(log).toHaveTextContent('Queued');
+    status = 'sent';
+    await waitFor(() => expect(log).toHaveTextContent('Sent'), { timeout: 8000 });
+    expect(server.callsTo('GET', '/api/invoices/inv-1/mails').length).toBeGreaterThanOrEqual(2);
+  });
+
   it('records a part payment by cheque, asking for the cheque number, with a receipt', async () => {
     const paid = invoice({
       status: 'part-paid',

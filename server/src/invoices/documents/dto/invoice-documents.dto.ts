@@ -27,7 +27,8 @@ export class InvoiceMailDto {
   @ApiProperty({ enum: INVOICE_MAIL_KINDS }) kind: InvoiceMailKind;
   @ApiProperty() toEmail: string;
   @ApiProperty() subject: string;
-  @ApiProperty({ enum: ['sent', 'failed'] }) status: 'sent' | 'failed';
+  @ApiProperty({ enum: ['queued', 'sent', 'failed'], description: "'queued' until the mail queue has tried it" })
+  status: 'queued' | 'sent' | 'failed';
   @ApiProperty({ nullable: true, type: String, description: "The mail relay's reason when it failed" })
   error: string | null;
   @ApiProperty() createdAt: string;

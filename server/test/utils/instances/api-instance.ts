@@ -1,0 +1,9 @@
+/**
+ * One API server process for the several-instances test: the real main.ts (its own port, pool, pg-boss and workers),
+ * compiled by compiled-server.ts and started by api-instances.ts with fork, so it has an IPC channel to the test.
+ */
+import '../../../src/main';
+
+// The channel closes when the test process ends in any way (even killed): the server goes with it, never an orphan
+// holding its port and database connections.
+process.on('disconnect', () => process.exit(1));
