@@ -31,6 +31,7 @@ const ROLE_PAGES: Record<Role, { label: string; nav: string[] }> = {
       'Team',
       'Rates',
       'Business profile',
+      'Audit log',
       'Outbox',
     ],
   },
