@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { PassportStrategy } from '@nestjs/passport';
+import { createSecretKey } from 'node:crypto';
 import { ExtractJwt, Strategy } from 'passport-jwt';
 import type { AppConfig } from '../config/environment';
 import { UsersService } from '../users/users.service';
@@ -11,6 +12,15 @@ interface AccessClaims {
   sub: string;
 }
 
+/**
+ * The secret as a KeyObject. Given a string or Buffer, jsonwebtoken first tries to read it as a PEM public key and
+ * catches the failure, on every request; a KeyObject skips that. passport-jwt hands the key to jsonwebtoken as it is,
+ * though its types list only string | Buffer.
+ */
+function verificationKey(secret: string): Buffer {
+  return createSecretKey(Buffer.from(secret, 'utf8')) as unknown as Buffer;
+}
+
 @Injectable()
 export class JwtStrategy extends PassportStrategy(Strategy) {
   constructor(
@@ -19,7 +29,7 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
   ) {
     super({
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
-      secretOrKey: config.get('JWT_SECRET', { infer: true }),
+      secretOrKey: verificationKey(config.get('JWT_SECRET', { infer: true })),
       algorithms: [JWT_ALGORITHM],
       issuer: JWT_ISSUER,
       audience: JWT_AUDIENCE,

@@ -8,16 +8,28 @@ export interface BusinessMoment {
   minute: number;
 }
 
+/** One formatter per time zone: building an Intl.DateTimeFormat costs far more than formatting with it. */
+const momentFormats = new Map<string, Intl.DateTimeFormat>();
+
+function momentFormat(timeZone: string): Intl.DateTimeFormat {
+  let format = momentFormats.get(timeZone);
+  if (!format) {
+    format = new Intl.DateTimeFormat('en-US', {
+      timeZone,
+      year: 'numeric',
+      month: '2-digit',
+      day: '2-digit',
+      hour: '2-digit',
+      minute: '2-digit',
+      hourCycle: 'h23',
+    });
+    momentFormats.set(timeZone, format);
+  }
+  return format;
+}
+
 export function businessMoment(timeZone: string, at: Date): BusinessMoment {
-  const parts = new Intl.DateTimeFormat('en-US', {
-    timeZone,
-    year: 'numeric',
-    month: '2-digit',
-    day: '2-digit',
-    hour: '2-digit',
-    minute: '2-digit',
-    hourCycle: 'h23',
-  }).formatToParts(at);
+  const parts = momentFormat(timeZone).formatToParts(at);
   const part = (type: Intl.DateTimeFormatPartTypes) => parts.find((p) => p.type === type)?.value ?? '';
   return {
     date: `${part('year')}-${part('month')}-${part('day')}`,

@@ -3,7 +3,7 @@ import { ConfigService } from '@nestjs/config';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
 import type { AppConfig } from '../config/environment';
-import { businessToday } from '../shears/shear-rules';
+import { todayIn } from '../stops/business-today';
 import { suggestionsFor, type Suggestion } from './drive-cost';
 import type { AnyReportQueryDto, ReceivablesGroup } from './dto/report-query.dto';
 import { CADENCE_GRACE_DAYS, REPORT_QUERIES, type ReportName, type ReportOptions } from './report-queries';
@@ -67,7 +67,7 @@ export class ReportsService {
   }
 
   range(query: AnyReportQueryDto): ReportRange {
-    return reportRange(query, businessToday(this.timeZone));
+    return reportRange(query, todayIn(this.timeZone));
   }
 
   private async run(name: ReportName, range: ReportRange, options: Partial<ReportOptions> = {}): Promise<Raw[]> {

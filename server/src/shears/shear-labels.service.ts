@@ -11,7 +11,7 @@ import { Customer } from '../customers/entities/customer.entity';
 import { LABELS_MAX, type LabelsQueryDto } from './dto/labels-query.dto';
 import { Shear } from './entities/shear.entity';
 import { labelDescription, labelSlot, qrModuleRuns, SHEET, type LabelContent } from './label-sheet';
-import { businessToday } from './shear-rules';
+import { todayIn } from '../stops/business-today';
 
 // The same Inter the web app ships; pdfkit embeds the .woff files (it cannot read woff2).
 const INTER_REGULAR = require.resolve('@fontsource/inter/files/inter-latin-400-normal.woff');
@@ -34,7 +34,7 @@ export class ShearLabelsService {
 
   async sheet(actor: Actor, query: LabelsQueryDto): Promise<LabelSheetFile> {
     const labels = await this.select(actor, query);
-    const today = businessToday(this.config.get('BUSINESS_TIME_ZONE', { infer: true }));
+    const today = todayIn(this.config.get('BUSINESS_TIME_ZONE', { infer: true }));
     return { pdf: await renderLabels(labels), fileName: `keenroute-shear-labels-${today}.pdf` };
   }
 

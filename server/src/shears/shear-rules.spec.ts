@@ -1,5 +1,5 @@
 import { RuleError } from '@keenroute/shared';
-import { businessToday, checkedShear, movedSummary, statusSummary } from './shear-rules';
+import { checkedShear, movedSummary, statusSummary } from './shear-rules';
 
 const shape = { edgeType: 'convex', toolKind: 'straight', lengthIn: 6.5, handedness: 'left', use: 'grooming' } as const;
 
@@ -30,13 +30,5 @@ describe('history summaries', () => {
     expect(statusSummary('retired')).toBe('Marked retired');
     expect(statusSummary('in-service')).toBe('Back in service');
     expect(movedSummary('Mara', 'Bryn')).toBe('Moved from Mara to Bryn');
-  });
-});
-
-describe('businessToday', () => {
-  it("gives the calendar date in the business's time zone, not the server's", () => {
-    const lateEvening = new Date('2025-01-01T03:30:00Z');
-    expect(businessToday('America/Chicago', lateEvening)).toBe('2024-12-31');
-    expect(businessToday('Europe/Berlin', lateEvening)).toBe('2025-01-01');
   });
 });

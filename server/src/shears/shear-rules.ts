@@ -37,11 +37,3 @@ export function statusSummary(to: ShearStatus): string {
 export function movedSummary(fromCustomer: string, toCustomer: string): string {
   return `Moved from ${fromCustomer} to ${toCustomer}`;
 }
-
-/** Today's calendar date "YYYY-MM-DD" where the business is, which is what a history line's day means. */
-export function businessToday(timeZone: string, now = new Date()): string {
-  const parts = new Intl.DateTimeFormat('en-US', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' })
-    .formatToParts(now)
-    .reduce<Record<string, string>>((all, part) => ({ ...all, [part.type]: part.value }), {});
-  return `${parts.year}-${parts.month}-${parts.day}`;
-}

@@ -1,5 +1,5 @@
 import { normalizeTagCode } from '@keenroute/shared';
-import type { Repository, SelectQueryBuilder } from 'typeorm';
+import type { ObjectLiteral, Repository, SelectQueryBuilder } from 'typeorm';
 import { likePattern } from '../common/pagination.dto';
 import { refOrNull } from '../customers/dto/ref.dto';
 import { Customer } from '../customers/entities/customer.entity';
@@ -35,6 +35,17 @@ interface SummaryRaw {
   sharpening_count: number;
 }
 
+/**
+ * The shears a list page picks from: joined to their customer only to sort by the customer's name. The filters read
+ * the customer through subqueries, so a count or a page by tag code reads the shears' own indexes alone.
+ */
+export function shearListQuery(shears: Repository<Shear>, query: ListShearsQueryDto): SelectQueryBuilder<Shear> {
+  const builder = shears.createQueryBuilder('shear');
+  return query.sort === 'customer'
+    ? builder.innerJoin(Customer, 'customer', 'customer.id = shear.customerId')
+    : builder;
+}
+
 /** Shears with their customer, the customer's stop, photo count, last service date and times sharpened. */
 export function shearSummaryQuery(shears: Repository<Shear>): SelectQueryBuilder<Shear> {
   return shears
@@ -49,21 +60,41 @@ export function shearSummaryQuery(shears: Repository<Shear>): SelectQueryBuilder
     .addSelect(SHARPENING_COUNT, 'sharpening_count');
 }
 
+/**
+ * Shears whose tag code, make, model or customer's name contains the text, as one id set: each part can use its
+ * trigram index, where ORing them across the join made PostgreSQL test every shear with four ILIKEs.
+ */
+const TEXT_MATCH = `shear.id IN (
+  SELECT matched.id FROM shears matched
+   WHERE matched.tag_code ILIKE :like OR matched.make ILIKE :like OR matched.model ILIKE :like
+  UNION
+  SELECT owned.id FROM shears owned JOIN customers owner ON owner.id = owned.customer_id WHERE owner.name ILIKE :like)`;
+
+const TAG_OR_TEXT_MATCH = TEXT_MATCH.replace(
+  'WHERE matched.tag_code ILIKE',
+  'WHERE matched.tag_code = :tag OR matched.tag_code ILIKE',
+);
+
 /** The list's filters and search; a search that reads as a tag code ("kr 12", "000012") also matches it exactly. */
-export function filterShears(builder: SelectQueryBuilder<Shear>, query: ListShearsQueryDto): SelectQueryBuilder<Shear> {
+export function filterShears<T extends ObjectLiteral>(
+  builder: SelectQueryBuilder<T>,
+  query: ListShearsQueryDto,
+): SelectQueryBuilder<T> {
   const text = query.q?.trim();
   if (text) {
     const tag = normalizeTagCode(text);
-    const fuzzy =
-      'shear.tagCode ILIKE :like OR shear.make ILIKE :like OR shear.model ILIKE :like OR customer.name ILIKE :like';
     if (tag) {
-      builder.andWhere(`(shear.tagCode = :tag OR ${fuzzy})`, { tag, like: likePattern(text) });
+      builder.andWhere(TAG_OR_TEXT_MATCH, { tag, like: likePattern(text) });
     } else {
-      builder.andWhere(`(${fuzzy})`, { like: likePattern(text) });
+      builder.andWhere(TEXT_MATCH, { like: likePattern(text) });
     }
   }
   if (query.customerId) builder.andWhere('shear.customerId = :customerId', { customerId: query.customerId });
-  if (query.stopId) builder.andWhere('customer.stopId = :stopId', { stopId: query.stopId });
+  if (query.stopId) {
+    builder.andWhere('shear.customerId IN (SELECT at_stop.id FROM customers at_stop WHERE at_stop.stop_id = :stopId)', {
+      stopId: query.stopId,
+    });
+  }
   if (query.edgeType) builder.andWhere('shear.edgeType = :edgeType', { edgeType: query.edgeType });
   if (query.toolKind) builder.andWhere('shear.toolKind = :toolKind', { toolKind: query.toolKind });
   if (query.status) builder.andWhere('shear.status = :status', { status: query.status });
@@ -71,12 +102,17 @@ export function filterShears(builder: SelectQueryBuilder<Shear>, query: ListShea
 }
 
 /** The chosen sort; a search by tag code puts the shear with exactly that code first. */
-export function sortShears(builder: SelectQueryBuilder<Shear>, query: ListShearsQueryDto): SelectQueryBuilder<Shear> {
+export function sortShears<T extends ObjectLiteral>(
+  builder: SelectQueryBuilder<T>,
+  query: ListShearsQueryDto,
+): SelectQueryBuilder<T> {
   const tag = query.q ? normalizeTagCode(query.q) : undefined;
   if (tag) builder.addSelect('(shear.tag_code = :tag)', 'tag_exact').orderBy('tag_exact', 'DESC');
-  builder.addOrderBy(SORT_COLUMNS[query.sort], query.order === 'desc' ? 'DESC' : 'ASC');
+  const direction = query.order === 'desc' ? 'DESC' : 'ASC';
+  builder.addOrderBy(SORT_COLUMNS[query.sort], direction);
   // TypeORM keys ORDER BY terms by column, so a tie-break on the sort column itself would overwrite its direction.
-  return query.sort === 'tagCode' ? builder : builder.addOrderBy('shear.tagCode', 'ASC');
+  // The tie-break runs the same way as the sort, so one (column, tag code) index serves a page in both directions.
+  return query.sort === 'tagCode' ? builder : builder.addOrderBy('shear.tagCode', direction);
 }
 
 /** Runs a summary query; raw rows are matched to entities by id, not by position. */

@@ -15,8 +15,16 @@ import type { UpdateShearDto } from './dto/update-shear.dto';
 import { ShearHistoryEntry, type ShearHistoryKind } from './entities/shear-history-entry.entity';
 import { ShearPhoto } from './entities/shear-photo.entity';
 import { Shear } from './entities/shear.entity';
-import { businessToday, checkedShear, movedSummary, statusSummary } from './shear-rules';
-import { fetchShearRows, fetchSummaries, filterShears, shearSummaryQuery, sortShears } from './shears-query';
+import { checkedShear, movedSummary, statusSummary } from './shear-rules';
+import { todayIn } from '../stops/business-today';
+import {
+  fetchShearRows,
+  fetchSummaries,
+  filterShears,
+  shearListQuery,
+  shearSummaryQuery,
+  sortShears,
+} from './shears-query';
 
 /** Fields a shear always has: a PATCH may leave them out, not clear them. */
 const REQUIRED_ON_UPDATE = ['customerId', 'lengthIn', 'edgeType', 'toolKind', 'handedness', 'use', 'status'] as const;
@@ -29,15 +37,25 @@ export class ShearsService {
     private readonly config: ConfigService<AppConfig, true>,
   ) {}
 
+  /**
+   * One page of the list: the page's ids first (filters, sort, offset), then the summaries of those shears only, so
+   * the per-shear counts are not computed for every shear before the sort and every row the offset skips.
+   */
   async list(actor: Actor, query: ListShearsQueryDto): Promise<{ items: ShearSummaryDto[]; total: number }> {
-    const builder = filterShears(this.access.scopeShears(shearSummaryQuery(this.shears), actor, 'shear'), query);
-    const total = await builder.getCount();
-    const items = await fetchSummaries(
-      sortShears(builder, query)
-        .offset((query.page - 1) * query.pageSize)
-        .limit(query.pageSize),
-    );
-    return { items, total };
+    const matching = filterShears(this.access.scopeShears(shearListQuery(this.shears, query), actor, 'shear'), query);
+    // The customer join (sorting by name) gives each shear one row, so COUNT(*) is the total without the sort that
+    // TypeORM's COUNT(DISTINCT id) costs.
+    const counted = await matching.clone().select('COUNT(*)::int', 'total').getRawOne<{ total: number }>();
+    const total = counted?.total ?? 0;
+    const page = await sortShears(matching.select('shear.id', 'id'), query)
+      .offset((query.page - 1) * query.pageSize)
+      .limit(query.pageSize)
+      .getRawMany<{ id: string }>();
+    if (page.length === 0) return { items: [], total };
+    const ids = page.map((row) => row.id);
+    const summaries = await fetchSummaries(shearSummaryQuery(this.shears).where('shear.id IN (:...ids)', { ids }));
+    const byId = new Map(summaries.map((summary) => [summary.id, summary]));
+    return { items: ids.flatMap((id) => byId.get(id) ?? []), total };
   }
 
   async get(actor: Actor, id: string): Promise<ShearDetailDto> {
@@ -138,7 +156,7 @@ export class ShearsService {
   }
 
   private async record(manager: EntityManager, actor: Actor, shearId: string, kind: ShearHistoryKind, summary: string) {
-    const happenedOn = businessToday(this.config.get('BUSINESS_TIME_ZONE', { infer: true }));
+    const happenedOn = todayIn(this.config.get('BUSINESS_TIME_ZONE', { infer: true }));
     await manager.getRepository(ShearHistoryEntry).insert({ shearId, kind, summary, happenedOn, recordedBy: actor.id });
   }
 }

@@ -6,7 +6,7 @@ import { DomainError, notFound } from '../common/errors/domain-error';
 import type { AppConfig } from '../config/environment';
 import { RateCardVersion } from '../rates/entities/rate-card-version.entity';
 import { Shear } from '../shears/entities/shear.entity';
-import { businessToday } from '../shears/shear-rules';
+import { todayIn } from '../stops/business-today';
 import { Stop } from '../stops/entities/stop.entity';
 import { TicketLine } from './entities/ticket-line.entity';
 import { Ticket, type ExpectedPairs, type TicketKind } from './entities/ticket.entity';
@@ -31,7 +31,7 @@ export class TicketWriter {
   constructor(private readonly config: ConfigService<AppConfig, true>) {}
 
   today(): string {
-    return businessToday(this.config.get('BUSINESS_TIME_ZONE', { infer: true }));
+    return todayIn(this.config.get('BUSINESS_TIME_ZONE', { infer: true }));
   }
 
   /**

@@ -2,7 +2,6 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { BENCH_CAUTIONS } from '@keenroute/shared';
 import type { DataSource } from 'typeorm';
-import { RouteDayAccess } from '../../access/route-day-access';
 import type { Actor } from '../../auth/actor';
 import { bookingsForSheet } from '../../bookings/day-sheet-bookings';
 import { ExpectedBenchService } from '../planning/expected-bench';
@@ -25,27 +24,25 @@ interface StopContactRow {
 export class DaySheetService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
-    private readonly access: RouteDayAccess,
     private readonly routeDays: RouteDaysService,
     private readonly expectedBench: ExpectedBenchService,
   ) {}
 
   async sheet(actor: Actor, id: string): Promise<DaySheetDto> {
-    await this.access.requireRouteDay(actor, id, 'read');
-    const routeDay = await this.routeDays.get(actor, id);
+    const routeDay = await this.routeDays.get(actor, id); // checks the actor may read the day
     const stopIds = routeDay.stops.map((s) => s.stopId);
-    const contacts = new Map(
-      (
-        await this.dataSource.query<StopContactRow[]>(
-          `SELECT id, postal_code, phone, email, access_parking, access_door, access_best_time
-             FROM stops WHERE id = ANY($1)`,
-          [stopIds],
-        )
-      ).map((row) => [row.id, row]),
-    );
-    const customers = await this.customers(stopIds);
-    const bench = await this.expectedBench.forStops(stopIds);
-    const bookings = await bookingsForSheet(this.dataSource.manager, id);
+    // Independent reads, each on its own pooled connection: one wait for the pool under load instead of four.
+    const [contactRows, customers, bench, bookings] = await Promise.all([
+      this.dataSource.query<StopContactRow[]>(
+        `SELECT id, postal_code, phone, email, access_parking, access_door, access_best_time
+           FROM stops WHERE id = ANY($1)`,
+        [stopIds],
+      ),
+      this.customers(stopIds),
+      this.expectedBench.forStops(stopIds),
+      bookingsForSheet(this.dataSource.manager, id),
+    ]);
+    const contacts = new Map(contactRows.map((row) => [row.id, row]));
     return {
       routeDay,
       stops: routeDay.stops.map((stop) => {

@@ -2,7 +2,7 @@ import type { INestApplication } from '@nestjs/common';
 import type { App } from 'supertest/types';
 import { DataSource } from 'typeorm';
 import { validateEnvironment } from '../../../src/config/environment';
-import { businessToday } from '../../../src/shears/shear-rules';
+import { todayIn } from '../../../src/stops/business-today';
 import { TicketWriter } from '../../../src/tickets/ticket-writer';
 import type { ApiInstance } from './api-instances';
 
@@ -14,7 +14,7 @@ import type { ApiInstance } from './api-instances';
 export function instanceApp(instance: ApiInstance, db: DataSource): INestApplication<App> {
   const timeZone = validateEnvironment(process.env).BUSINESS_TIME_ZONE;
   const ticketWriter: Pick<TicketWriter, 'today'> = {
-    today: () => businessToday(timeZone),
+    today: () => todayIn(timeZone),
   };
   const providers = new Map<unknown, unknown>([
     [DataSource, db],
