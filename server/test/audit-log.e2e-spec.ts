@@ -303,6 +303,7 @@ describe('audit log (e2e)', () => {
     it('cannot be changed or removed afterwards', async () => {
       await expect(db.query(`UPDATE audit_entries SET action = 'sign-in' WHERE true`)).rejects.toThrow(/append-only/);
       await expect(db.query(`DELETE FROM audit_entries`)).rejects.toThrow(/append-only/);
+      await expect(db.query(`TRUNCATE audit_entries`)).rejects.toThrow(/append-only/);
     });
   });
 

@@ -3,6 +3,7 @@ import type { ConfigService } from '@nestjs/config';
 import Papa from 'papaparse';
 import type { DataSource, Repository } from 'typeorm';
 import type { Actor } from '../auth/actor';
+import { BIDI_CONTROL_MESSAGE } from '../common/validation/unsafe-input';
 import type { AppConfig } from '../config/environment';
 import { headerProblem } from './csv/check-header';
 import { parseCsv } from './csv/parse-csv';
@@ -68,6 +69,12 @@ describe('stop rows', () => {
     ]);
     expect(problems[3]!.message).toMatch(/from 1 to 52/);
     expect(problems[4]!.message).toMatch(/basis points/);
+  });
+
+  it('refuses a name with a direction override, as the API does for typed text', () => {
+    const { draft, problems } = readStopRow({ ...stopRow, name: 'Salon \u202Egnp.exe' });
+    expect(draft).toBeNull();
+    expect(problems).toEqual([{ column: 'name', message: BIDI_CONTROL_MESSAGE }]);
   });
 
   it('finds duplicates within the file and against the stops already there, ignoring case', () => {

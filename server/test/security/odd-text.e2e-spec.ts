@@ -3,16 +3,18 @@ import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import type { App } from 'supertest/types';
 import { DataSource } from 'typeorm';
+import { BIDI_CONTROL_MESSAGE } from '../../src/common/validation/unsafe-input';
 import { createTestApp, createUser, signIn } from '../utils/test-app';
 
 /**
- * Text that is odd but valid (emoji, right-to-left overrides, SQL and script fragments, combining marks) is either
+ * Text that is odd but valid (emoji, right-to-left script, SQL and script fragments, combining marks) is either
  * stored exactly as sent or refused with a message on its field; NUL never reaches PostgreSQL, whether it comes in a
- * JSON body or inside an imported CSV file (refused there as not UTF-8 text). Rows are counted around every request.
+ * JSON body or inside an imported CSV file (refused there as not UTF-8 text), and direction overrides, which make a
+ * name show other than it reads, are refused on their field. Rows are counted around every request.
  */
 const ODD_TEXT: [string, string][] = [
   ['emoji', 'Shear Shack ✂️💈 (demo)'],
-  ['a right-to-left override', 'Salon \u202Egnp.exe'],
+  ['right-to-left script', 'صالون ✂️ מספרה'],
   ['SQL', "O'Brien's'); DROP TABLE stops; --"],
   ['script', '<script>alert(1)</script>'],
   ['combining marks and a zero-width space', 'Cafe\u0301\u200B Row'],
@@ -71,6 +73,20 @@ describe('odd text (e2e)', () => {
       .send({ name: `Nul\u0000Salon ${tag()}`, kind: 'salon', street: '1 Odd Row', city: 'Larkhaven' })
       .expect(400);
     expect(response.body.fields).toEqual({ name: ['Text cannot contain NUL characters.'] });
+    expect(await count('stops')).toBe(before);
+  });
+
+  it.each([
+    ['a right-to-left override', '\u202E'],
+    ['a right-to-left isolate', '\u2067'],
+  ])('refuses a stop name with %s on its field, writing nothing', async (_what, control) => {
+    const before = await count('stops');
+    const response = await http()
+      .post('/api/stops')
+      .set(as)
+      .send({ name: `Salon ${control}gnp.exe ${tag()}`, kind: 'salon', street: '1 Odd Row', city: 'Larkhaven' })
+      .expect(400);
+    expect(response.body.fields).toEqual({ name: [BIDI_CONTROL_MESSAGE] });
     expect(await count('stops')).toBe(before);
   });
 

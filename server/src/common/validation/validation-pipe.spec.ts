@@ -1,7 +1,7 @@
 import { BadRequestException, type ArgumentMetadata, type ValidationError } from '@nestjs/common';
 import { IsOptional, IsString } from 'class-validator';
 import { createValidationPipe, fieldMessages } from './validation-pipe';
-import { BROKEN_UNICODE_MESSAGE, NUL_MESSAGE } from './unsafe-input';
+import { BIDI_CONTROL_MESSAGE, BROKEN_UNICODE_MESSAGE, NUL_MESSAGE } from './unsafe-input';
 
 class NoteDto {
   @IsString()
@@ -41,7 +41,18 @@ describe('createValidationPipe', () => {
   };
 
   it('passes a clean body through as the DTO', async () => {
-    await expect(sut.transform({ text: 'Café ✂️ \u202Eright-to-left' }, body)).resolves.toBeInstanceOf(NoteDto);
+    await expect(sut.transform({ text: 'Café ✂️ شحذ מספריים' }, body)).resolves.toBeInstanceOf(NoteDto);
+  });
+
+  it('refuses direction overrides and isolates, which make a name show other than it reads', async () => {
+    // The characters as Unicode Standard Annex #9 (the bidirectional algorithm) lists them: LRE, RLE, PDF, LRO,
+    // RLO (U+202A-U+202E) and LRI, RLI, FSI, PDI (U+2066-U+2069).
+    const controls = ['\u202A', '\u202B', '\u202C', '\u202D', '\u202E', '\u2066', '\u2067', '\u2068', '\u2069'];
+    for (const control of controls) {
+      expect((await refusal({ text: `Salon ${control}gnp.exe` })).fields).toEqual({ text: [BIDI_CONTROL_MESSAGE] });
+    }
+    // The marks next to them (LRM U+200E, RLM U+200F) only nudge neutral characters and stay allowed.
+    await expect(sut.transform({ text: 'Salon \u200F(demo)' }, body)).resolves.toBeInstanceOf(NoteDto);
   });
 
   it('refuses NUL characters and lone surrogates, naming the field', async () => {

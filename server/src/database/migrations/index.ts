@@ -10,8 +10,9 @@ import { AddReportIndexes1765152000000 } from './1765152000000-AddReportIndexes'
 import { CreateAuditEntries1765238400000 } from './1765238400000-CreateAuditEntries';
 import { AddTicketShearCount1765324800000 } from './1765324800000-AddTicketShearCount';
 import { CreateRateLimitHits1765411200000 } from './1765411200000-CreateRateLimitHits';
-import { AddShearListIndexes1765587600000 } from './1765587600000-AddShearListIndexes';
 import { CreateMailOutbox1765501200000 } from './1765501200000-CreateMailOutbox';
+import { AddShearListIndexes1765587600000 } from './1765587600000-AddShearListIndexes';
+import { AddAuditTruncateGuard1765674000000 } from './1765674000000-AddAuditTruncateGuard';
 
 /** Listed explicitly, oldest first, so the CLI, the app and jest load the same migrations without globs. */
 export const migrations = [
@@ -29,4 +30,5 @@ export const migrations = [
   CreateRateLimitHits1765411200000,
   CreateMailOutbox1765501200000,
   AddShearListIndexes1765587600000,
+  AddAuditTruncateGuard1765674000000,
 ];

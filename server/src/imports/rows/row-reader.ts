@@ -1,5 +1,6 @@
 import { isRuleError } from '@keenroute/shared';
 import { isEmail } from 'class-validator';
+import { BIDI_CONTROL_MESSAGE, hasBidiControl } from '../../common/validation/unsafe-input';
 import type { CsvRecord } from '../import-kinds';
 
 /** One problem in one row; the column is null when it concerns the whole row. */
@@ -56,6 +57,7 @@ export class RowReader {
     if (required && value === '') this.problem(column, `${column} is required.`);
     else if (value.length > max)
       this.problem(column, `${column} is at most ${max} characters; this one has ${value.length}.`);
+    else if (hasBidiControl(value)) this.problem(column, BIDI_CONTROL_MESSAGE);
     return value;
   }
 
