@@ -81,6 +81,15 @@ export async function overflowsHorizontally(page: Page): Promise<boolean> {
   return page.evaluate(() => document.documentElement.scrollWidth > window.innerWidth + 1);
 }
 
+/** The badges whose words do not fit inside them (shown cut short with "…"): a squeezed status or day name. */
+export async function cutBadges(page: Page): Promise<string[]> {
+  return page.evaluate(() =>
+    [...document.querySelectorAll('.mantine-Badge-label')]
+      .filter((label) => label.scrollWidth > label.clientWidth + 1)
+      .map((label) => label.textContent ?? ''),
+  );
+}
+
 /** Calls the API as a demo user, for the set-up the office or a planner would have done before the journey. */
 export async function api(email: string, password = DEMO_PASSWORD) {
   const login = await fetch(`${BASE_URL}/api/auth/login`, {

@@ -2,6 +2,7 @@ import type { Role } from '@keenroute/shared';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import {
   BASE_URL,
+  cutBadges,
   DESKTOP,
   launchBrowser,
   navLabels,
@@ -108,6 +109,22 @@ describe('each demo role in a browser', () => {
     await page.goto(`${BASE_URL}/`);
     await page.getByRole('heading', { level: 1, name: 'Sign in' }).waitFor();
   });
+
+  // The pages whose lists and cards carry status and day badges; on a phone they once came out as "Hand…" and "Fr…".
+  it.each(['/week', '/tickets', '/customers', '/invoices', '/imports', '/audit'])(
+    'shows %s on a phone with no page overflow and no badge cut short',
+    async (path) => {
+      const { page, context } = browser;
+      await context.clearCookies();
+      await page.setViewportSize(PHONE);
+      await signIn(page, 'owner@demo.keenroute.test');
+      await page.goto(`${BASE_URL}${path}`);
+      await page.getByRole('heading', { level: 1 }).waitFor();
+      await page.waitForLoadState('networkidle');
+      expect(await overflowsHorizontally(page)).toBe(false);
+      expect(await cutBadges(page)).toEqual([]);
+    },
+  );
 
   it('keeps the person signed in across a reload', async () => {
     const { page, context } = browser;

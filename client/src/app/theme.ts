@@ -62,6 +62,8 @@ export const theme = createTheme({
     TextInput: { defaultProps: { size: 'md' } },
     PasswordInput: { defaultProps: { size: 'md' } },
     Select: { defaultProps: { size: 'md' } },
+    // A badge is a word or two ("Handed back", "Fri"): a table or a narrow card squeezed them to "Hand…" on a phone.
+    Badge: { styles: { root: { minWidth: 'max-content' } } },
     NavLink: { styles: { root: { minHeight: rem(48), borderRadius: 'var(--mantine-radius-md)' } } },
   },
 });
