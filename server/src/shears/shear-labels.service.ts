@@ -1,11 +1,12 @@
 import { Injectable } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectRepository } from '@nestjs/typeorm';
-import PDFDocument from 'pdfkit';
 import { Repository } from 'typeorm';
 import { RegistryAccess } from '../access/registry-access';
 import type { Actor } from '../auth/actor';
 import { DomainError } from '../common/errors/domain-error';
+import { INTER, INTER_BOLD } from '../common/pdf/fonts';
+import { renderToBuffer } from '../common/pdf/render-to-buffer';
 import type { AppConfig } from '../config/environment';
 import { Customer } from '../customers/entities/customer.entity';
 import { LABELS_MAX, type LabelsQueryDto } from './dto/labels-query.dto';
@@ -13,9 +14,6 @@ import { Shear } from './entities/shear.entity';
 import { labelDescription, labelSlot, qrModuleRuns, SHEET, type LabelContent } from './label-sheet';
 import { todayIn } from '../stops/business-today';
 
-// The same Inter the web app ships; pdfkit embeds the .woff files (it cannot read woff2).
-const INTER_REGULAR = require.resolve('@fontsource/inter/files/inter-latin-400-normal.woff');
-const INTER_BOLD = require.resolve('@fontsource/inter/files/inter-latin-700-normal.woff');
 const PADDING = 6;
 const QR_SIZE = SHEET.labelHeight - 2 * PADDING;
 
@@ -74,43 +72,30 @@ export class ShearLabelsService {
 
 /** One label per shear: the QR code of its tag code, the code large, then the owner and the shear in small type. */
 export function renderLabels(labels: LabelContent[]): Promise<Buffer> {
-  const doc = new PDFDocument({
-    size: 'LETTER',
-    margin: 0,
-    info: { Title: 'Shear labels', Creator: 'Keenroute' },
-  });
-  const chunks: Buffer[] = [];
-  doc.on('data', (chunk: Buffer) => chunks.push(chunk));
-  const finished = new Promise<Buffer>((done, fail) => {
-    doc.on('end', () => done(Buffer.concat(chunks)));
-    doc.on('error', fail);
-  });
-  doc.registerFont('Inter', INTER_REGULAR);
-  doc.registerFont('Inter-Bold', INTER_BOLD);
-
+  const options = { size: 'LETTER', margin: 0, info: { Title: 'Shear labels', Creator: 'Keenroute' } } as const;
   const textX = PADDING + QR_SIZE + PADDING;
   const textWidth = SHEET.labelWidth - textX - PADDING;
-  labels.forEach((label, index) => {
-    const slot = labelSlot(index);
-    if (slot.page > 0 && index % (SHEET.columns * SHEET.rows) === 0) doc.addPage({ size: 'LETTER', margin: 0 });
-    drawQrCode(doc, label.tagCode, slot.x + PADDING, slot.y + PADDING, QR_SIZE);
-    const line = { width: textWidth, lineBreak: false, ellipsis: true } as const;
-    doc
-      .font('Inter-Bold')
-      .fontSize(15)
-      .fillColor('#000000')
-      .text(label.tagCode, slot.x + textX, slot.y + 10, line);
-    doc
-      .font('Inter')
-      .fontSize(8)
-      .text(label.customerName, slot.x + textX, slot.y + 33, line);
-    doc
-      .fontSize(7)
-      .fillColor('#333333')
-      .text(labelDescription(label), slot.x + textX, slot.y + 47, line);
+  return renderToBuffer(options, (doc) => {
+    labels.forEach((label, index) => {
+      const slot = labelSlot(index);
+      if (slot.page > 0 && index % (SHEET.columns * SHEET.rows) === 0) doc.addPage({ size: 'LETTER', margin: 0 });
+      drawQrCode(doc, label.tagCode, slot.x + PADDING, slot.y + PADDING, QR_SIZE);
+      const line = { width: textWidth, lineBreak: false, ellipsis: true } as const;
+      doc
+        .font(INTER_BOLD)
+        .fontSize(15)
+        .fillColor('#000000')
+        .text(label.tagCode, slot.x + textX, slot.y + 10, line);
+      doc
+        .font(INTER)
+        .fontSize(8)
+        .text(label.customerName, slot.x + textX, slot.y + 33, line);
+      doc
+        .fontSize(7)
+        .fillColor('#333333')
+        .text(labelDescription(label), slot.x + textX, slot.y + 47, line);
+    });
   });
-  doc.end();
-  return finished;
 }
 
 /** Draws the QR code inside a square of the given size, keeping one module of white around it. */
