@@ -6,9 +6,13 @@ export function useSearchBox(q: string, onSearch: (q: string) => void) {
   const [text, setText] = useState(q);
   // The q this box last sent: when the URL echoes it back, the person may have typed on meanwhile.
   const sent = useRef(q);
+  // The latest onSearch, not the one of the render the typing began in: that one's URL update would put back the
+  // filters as they were then, undoing a filter chosen during the pause.
+  const latest = useRef(onSearch);
+  latest.current = onSearch;
   const search = (value: string) => {
     sent.current = value;
-    onSearch(value);
+    latest.current(value);
   };
   const send = useDebouncedCallback((value: string) => search(value.trim()), 300);
   useEffect(() => {
