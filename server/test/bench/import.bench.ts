@@ -21,6 +21,7 @@ import { DataSource } from 'typeorm';
 import { Customer } from '../../src/customers/entities/customer.entity';
 import { typeormOptions } from '../../src/database/typeorm-options';
 import { createTestApp, createUser, TEST_PASSWORD } from '../utils/test-app';
+import { median, round1 } from './bench-stats';
 
 const ROWS = Number(process.env.BENCH_ROWS ?? 5000);
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 3);
@@ -33,9 +34,6 @@ interface Phase {
   healthAnswers: number;
   healthSlowestMs: number;
 }
-
-const round1 = (value: number) => Math.round(value * 10) / 10;
-const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)]!;
 
 /** Runs one request while health checks go out one after another, and reads the event-loop delay meanwhile. */
 async function measure(base: string, action: () => Promise<Response>): Promise<{ response: Response; phase: Phase }> {

@@ -12,10 +12,9 @@ import { renderInvoicePdf } from '../../src/invoices/documents/invoice-pdf';
 import { LABELS_PER_SHEET } from '../../src/shears/label-sheet';
 import { renderLabels } from '../../src/shears/shear-labels.service';
 import { demoDocument } from '../utils/invoice-document-fixture';
+import { median, round1 } from './bench-stats';
 
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 20);
-const round1 = (value: number) => Math.round(value * 10) / 10;
-const median = (values: number[]) => [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)]!;
 
 const long = demoDocument();
 long.lines = Array.from({ length: 60 }, (_, i) => ({ ...long.lines[0]!, id: `l${i}`, position: i }));

@@ -25,6 +25,7 @@ import { reportRange } from '../../src/reports/report-range';
 import { todayIn } from '../../src/stops/business-today';
 import { createTestApp, createUser, TEST_PASSWORD } from '../utils/test-app';
 import { seqScansOver, type PlanNode } from './explain-scans';
+import { round1 } from './bench-stats';
 
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 20);
 const WARMUPS = Number(process.env.BENCH_WARMUPS ?? 3);
@@ -42,7 +43,6 @@ interface Route {
   extra?: Record<string, string>;
 }
 
-const round1 = (value: number) => Math.round(value * 10) / 10;
 const percentile = (sorted: number[], share: number) => sorted[Math.max(0, Math.ceil(share * sorted.length) - 1)]!;
 
 async function signIn(base: string, app: INestApplication): Promise<Record<string, string>> {

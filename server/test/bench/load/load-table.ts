@@ -1,10 +1,10 @@
 import type { Result } from 'autocannon';
 import type { LoadKind, RouteRecord } from './load-mix';
+import { round1 } from '../bench-stats';
 
 /** p95 targets on this machine (issue 9): reads at most 100 ms, writes at most 200 ms. */
 export const P95_TARGET_MS: Readonly<Record<LoadKind, number>> = { reads: 100, writes: 200 };
 
-const round1 = (value: number) => Math.round(value * 10) / 10;
 /** A latency figure, or a dash when the route had no answer to measure. */
 const ms = (value: number): number | string => (Number.isNaN(value) ? '-' : round1(value));
 
