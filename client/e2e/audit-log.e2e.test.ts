@@ -10,6 +10,7 @@ import {
   screenshot,
   signIn,
   type Browser,
+  openFromNavigation,
 } from './browser';
 
 const OWNER = 'owner@demo.keenroute.test';
@@ -37,10 +38,7 @@ describe('the owner reads the audit log', () => {
     const { page } = browser;
     await page.setViewportSize(DESKTOP);
     await signIn(page, OWNER);
-    await page
-      .getByRole('navigation', { name: 'Main' })
-      .getByRole('link', { name: /Audit log/ })
-      .click();
+    await openFromNavigation(page, /Audit log/);
     await page.getByRole('heading', { level: 1, name: 'Audit log' }).waitFor();
     const table = page.getByRole('table', { name: 'Audit log' });
     await table.waitFor();
@@ -68,10 +66,7 @@ describe('the owner reads the audit log', () => {
     await page.setViewportSize(PHONE);
     await page.goto(`${BASE_URL}/`);
     await openPhoneNavigation(page);
-    await page
-      .getByRole('navigation', { name: 'Main' })
-      .getByRole('link', { name: /Audit log/ })
-      .click();
+    await openFromNavigation(page, /Audit log/);
     await page.getByRole('table', { name: 'Audit log' }).locator('tbody tr').first().waitFor();
     expect(await overflowsHorizontally(page)).toBe(false);
     await screenshot(page, 'audit-log-phone');

@@ -60,6 +60,11 @@ export async function openPhoneNavigation(page: Page): Promise<void> {
   });
 }
 
+/** Follows a link of the main navigation, as a person would from any page (on a phone, open the navigation first). */
+export async function openFromNavigation(page: Page, name: string | RegExp): Promise<void> {
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name }).click();
+}
+
 export async function signIn(page: Page, email: string, password = DEMO_PASSWORD): Promise<void> {
   await page.goto(`${BASE_URL}/sign-in`);
   await page.getByRole('textbox', { name: 'E-mail' }).fill(email);

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, navLabels, screenshot, signIn, type Browser } from './browser';
+import { launchBrowser, navLabels, openFromNavigation, screenshot, signIn, type Browser } from './browser';
 
 interface CaughtMessage {
   to: string | string[];
@@ -43,7 +43,7 @@ describe('the invitation journey', () => {
   it('invites a sharpener who sets a password and lands signed in; the link then works no more', async () => {
     const { page, context } = browser;
     await signIn(page, 'owner@demo.keenroute.test');
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Team' }).click();
+    await openFromNavigation(page, 'Team');
     await page.getByRole('button', { name: 'Invite someone' }).click();
 
     const dialog = page.getByRole('dialog', { name: 'Invite someone to Keenroute' });
@@ -58,7 +58,7 @@ describe('the invitation journey', () => {
 
     const link = await waitForLinkTo(invitee.email);
 
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Outbox' }).click();
+    await openFromNavigation(page, 'Outbox');
     await page.getByRole('link', { name: link }).first().waitFor();
 
     await page.getByRole('button', { name: 'Sign out' }).click();

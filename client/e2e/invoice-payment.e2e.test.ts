@@ -10,6 +10,7 @@ import {
   screenshot,
   signIn,
   type Browser,
+  openFromNavigation,
 } from './browser';
 
 const MAIL_CATCHER_URL = process.env.MAIL_CATCHER_URL?.replace(/\/$/, '');
@@ -93,10 +94,7 @@ describe('an invoice sent, paid online, and shown paid', () => {
     await page.setViewportSize(DESKTOP);
     await signIn(page, 'office@demo.keenroute.test');
 
-    await page
-      .getByRole('navigation', { name: 'Main' })
-      .getByRole('link', { name: /Invoices/ })
-      .click();
+    await openFromNavigation(page, /Invoices/);
     await page.getByRole('link', { name: 'New invoice' }).click();
     const group = page.getByRole('region', { name: customerName });
     await group.getByRole('button', { name: 'Make the draft invoice' }).click();

@@ -6,6 +6,7 @@ import {
   DESKTOP,
   PHONE,
   launchBrowser,
+  openFromNavigation,
   overflowsHorizontally,
   screenshot,
   signIn,
@@ -39,7 +40,7 @@ describe('the registry in the browser', () => {
     await page.setViewportSize(DESKTOP);
     await signIn(page, 'office@demo.keenroute.test');
 
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Stops' }).click();
+    await openFromNavigation(page, 'Stops');
     await page
       .getByRole('link', { name: 'Add a stop' })
       .or(page.getByRole('button', { name: 'Add a stop' }))
@@ -77,7 +78,7 @@ describe('the registry in the browser', () => {
     await page.getByRole('button', { name: 'Done' }).click();
     await page.getByText(tagCode).first().waitFor();
 
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Shears' }).click();
+    await openFromNavigation(page, 'Shears');
     // Typed the way people read a tag aloud: the digits alone find it.
     await page
       .getByRole('searchbox', { name: 'Find by tag code, make or customer' })

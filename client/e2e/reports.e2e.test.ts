@@ -11,6 +11,7 @@ import {
   screenshot,
   signIn,
   type Browser,
+  openFromNavigation,
 } from './browser';
 
 const OWNER = 'owner@demo.keenroute.test';
@@ -47,10 +48,7 @@ describe('the owner reads revenue per stop', () => {
     const { page } = browser;
     await page.setViewportSize(DESKTOP);
     await signIn(page, OWNER);
-    await page
-      .getByRole('navigation', { name: 'Main' })
-      .getByRole('link', { name: /Reports/ })
-      .click();
+    await openFromNavigation(page, /Reports/);
     await page.getByRole('heading', { level: 1, name: 'Revenue per stop' }).waitFor();
 
     // The demo data has two years of history, so the last 12 months have stops with revenue.
@@ -106,10 +104,7 @@ describe('the owner reads revenue per stop', () => {
     await page.setViewportSize(PHONE);
     await page.goto(`${BASE_URL}/`);
     await openPhoneNavigation(page);
-    await page
-      .getByRole('navigation', { name: 'Main' })
-      .getByRole('link', { name: /Reports/ })
-      .click();
+    await openFromNavigation(page, /Reports/);
     await page.getByRole('table', { name: 'Revenue per stop' }).waitFor();
     await page.getByRole('region', { name: 'Top stops' }).locator('svg.recharts-surface').first().waitFor();
     expect(await overflowsHorizontally(page)).toBe(false);

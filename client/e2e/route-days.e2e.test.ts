@@ -6,6 +6,7 @@ import {
   DESKTOP,
   PHONE,
   launchBrowser,
+  openFromNavigation,
   openPhoneNavigation,
   overflowsHorizontally,
   screenshot,
@@ -56,7 +57,7 @@ describe('route days in the browser', () => {
     const { page } = browser;
     await page.setViewportSize(DESKTOP);
     await signIn(page, 'office@demo.keenroute.test');
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Week plan' }).click();
+    await openFromNavigation(page, 'Week plan');
     await page.getByRole('heading', { name: 'Week plan' }).waitFor();
     // Straight to next week by its address (the picker's own button is covered by component tests).
     await page.goto(`${BASE_URL}/week?week=${await nextMonday()}`);
@@ -106,7 +107,7 @@ describe('route days in the browser', () => {
     await page.setViewportSize({ width: 390, height: 844 });
     await signIn(page, 'sharpener@demo.keenroute.test');
     await openPhoneNavigation(page);
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'My week' }).click();
+    await openFromNavigation(page, 'My week');
     await page.getByRole('heading', { name: 'My week' }).waitFor();
     await page.goto(`${BASE_URL}/week?week=${await nextMonday()}`);
     await page.getByText('Next week', { exact: true }).waitFor();

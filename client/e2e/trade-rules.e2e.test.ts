@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DESKTOP, PHONE, launchBrowser, screenshot, signIn, type Browser } from './browser';
+import { DESKTOP, PHONE, launchBrowser, openFromNavigation, screenshot, signIn, type Browser } from './browser';
 
 describe('edge recipes and rates in the browser', () => {
   let browser: Browser;
@@ -15,10 +15,7 @@ describe('edge recipes and rates in the browser', () => {
     const { page, context } = browser;
     await page.setViewportSize(DESKTOP);
     await signIn(page, 'sharpener@demo.keenroute.test');
-    await page
-      .getByRole('navigation', { name: 'Main' })
-      .getByRole('link', { name: /Edge recipes/ })
-      .click();
+    await openFromNavigation(page, /Edge recipes/);
     await page.getByRole('heading', { name: 'Edge recipes' }).waitFor();
 
     await page.getByRole('button', { name: /Open recipe: Convex straight/i }).click();

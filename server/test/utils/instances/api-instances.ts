@@ -42,7 +42,7 @@ export function freePort(): Promise<number> {
 
 const exited = (child: ChildProcess) => child.exitCode !== null || child.signalCode !== null;
 
-function waitForExit(child: ChildProcess, timeoutMs: number): Promise<boolean> {
+function waitUntilGone(child: ChildProcess, timeoutMs: number): Promise<boolean> {
   if (exited(child)) return Promise.resolve(true);
   return new Promise((resolve) => {
     const timer = setTimeout(() => resolve(false), timeoutMs);
@@ -57,9 +57,9 @@ async function stopOne(instance: ApiInstance): Promise<void> {
   const { child } = instance;
   if (exited(child)) return;
   child.kill('SIGTERM');
-  if (await waitForExit(child, STOP_TIMEOUT_MS)) return;
+  if (await waitUntilGone(child, STOP_TIMEOUT_MS)) return;
   child.kill('SIGKILL');
-  await waitForExit(child, STOP_TIMEOUT_MS);
+  await waitUntilGone(child, STOP_TIMEOUT_MS);
 }
 
 export async function stopApiInstances(instances: readonly ApiInstance[]): Promise<void> {
