@@ -416,6 +416,45 @@ describe('reports (e2e)', () => {
     await http().get('/api/reports/payroll/csv').set(actors.as('office')).expect(404);
   });
 
+  it('exports each table of a two-table page: cadence per sharpener, receivables per stop; refuses a table a report lacks', async () => {
+    const cadence = await get('cadence', range);
+    const csv = await http()
+      .get('/api/reports/cadence/csv')
+      .query({ ...range, groupBy: 'sharpener' })
+      .set(actors.as('office'))
+      .expect(200);
+    expect(csv.headers['content-disposition']).toBe(
+      `attachment; filename="keenroute-cadence-by-sharpener-${REPORT_FROM}-${REPORT_TO}.csv"`,
+    );
+    const [header, ...rows] = Papa.parse<string[]>(csv.text.trimEnd(), { newline: '\r\n' }).data;
+    expect(header).toEqual(['Sharpener', 'Visits', 'On time', 'Late']);
+    const visitsInRange = tables.visits.filter((v) => v.worked_on >= REPORT_FROM && v.worked_on <= REPORT_TO);
+    expect(rows.reduce((sum, r) => sum + Number(r[1]), 0)).toBe(visitsInRange.length);
+    expect(rows).toEqual(
+      (cadence.bySharpener as Row[]).map((r) => [r.sharpenerName ?? '', ...[r.visits, r.onTime, r.late].map(String)]),
+    );
+
+    const byStop = await http()
+      .get('/api/reports/receivables/csv')
+      .query({ groupBy: 'stop' })
+      .set(actors.as('office'))
+      .expect(200);
+    expect(byStop.headers['content-disposition']).toMatch(/filename="keenroute-receivables-by-stop-/);
+
+    const refused = async (route: string, groupBy: string, pattern: RegExp) => {
+      const response = await http()
+        .get(`/api/reports/${route}/csv`)
+        .query({ groupBy })
+        .set(actors.as('office'))
+        .expect(400);
+      expect(JSON.stringify(response.body)).toMatch(pattern);
+    };
+    await refused('receivables', 'sharpener', /groupBy for the receivables report is customer or stop/);
+    await refused('cadence', 'customer', /groupBy for the cadence report is stop or sharpener/);
+    await refused('stops', 'stop', /one table: leave groupBy out/);
+    await refused('cadence', 'region', /groupBy is customer, stop or sharpener/);
+  });
+
   it('answers the owner and office only', async () => {
     const sharpener = await signIn(app, (await createUser(app, 'sharpener')).email);
     for (const route of ROUTES) {

@@ -1,6 +1,9 @@
+import { DomainError } from '../common/errors/domain-error';
 import { decimalAmount, toCsv, type CsvCell } from '../invoices/export/csv-cells';
 import type { Suggestion } from './drive-cost';
+import { CADENCE_GROUPS, RECEIVABLES_GROUPS, type ReportGroup } from './dto/report-query.dto';
 import type { ReportName } from './report-queries';
+import type { CadenceSharpenerRow } from './report-rows';
 
 /** One CSV column: its header and how to read the cell from an answer row. */
 interface Column {
@@ -111,16 +114,48 @@ export const REPORT_COLUMNS: Record<ReportName, Column[]> = {
   ],
 };
 
-/** The report as CSV: its rows, then its totals (where it has them) on a last row named "Total". */
-export function reportCsv(name: ReportName, answer: { rows: object[]; totals?: object }): string {
-  const columns = REPORT_COLUMNS[name];
-  const rows = answer.rows.map((row) => columns.map((column) => column.cell(row as Record<string, unknown>)));
-  if (answer.totals) {
-    const totals = answer.totals as Record<string, unknown>;
-    rows.push(columns.map((column, i) => (i === 0 ? 'Total' : column.cell(totals))));
+/** The cadence page's other table: on time and late per sharpener. */
+const CADENCE_BY_SHARPENER: Column[] = [
+  text('Sharpener', 'sharpenerName'),
+  number('Visits', 'visits'),
+  number('On time', 'onTime'),
+  number('Late', 'late'),
+];
+
+/** The reports whose page has more than one table, and the groupBy that names each (the first is the default). */
+const CSV_GROUPS: Partial<Record<ReportName, readonly ReportGroup[]>> = {
+  receivables: RECEIVABLES_GROUPS,
+  cadence: CADENCE_GROUPS,
+};
+
+/** The groupBy a report's CSV was asked for, refused where that report has no such table. */
+export function csvGroup(name: ReportName, groupBy: ReportGroup | undefined): ReportGroup | undefined {
+  const groups = CSV_GROUPS[name] ?? [];
+  if (groupBy === undefined || groups.includes(groupBy)) return groupBy;
+  const message = groups.length
+    ? `groupBy for the ${name} report is ${groups.join(' or ')}.`
+    : `The ${name} report has one table: leave groupBy out.`;
+  throw new DomainError('invalid_input', message, { groupBy: [message] });
+}
+
+function table(columns: Column[], answerRows: object[], totals?: object): string {
+  const rows = answerRows.map((row) => columns.map((column) => column.cell(row as Record<string, unknown>)));
+  if (totals) {
+    const cells = totals as Record<string, unknown>;
+    rows.push(columns.map((column, i) => (i === 0 ? 'Total' : column.cell(cells))));
   }
   return toCsv(
     columns.map((column) => column.header),
     rows,
   );
+}
+
+/** The report as CSV: its rows, then its totals (where it has them) on a last row named "Total". */
+export function reportCsv(
+  name: ReportName,
+  answer: { rows: object[]; totals?: object; bySharpener?: CadenceSharpenerRow[] },
+  groupBy?: ReportGroup,
+): string {
+  if (name === 'cadence' && groupBy === 'sharpener') return table(CADENCE_BY_SHARPENER, answer.bySharpener ?? []);
+  return table(REPORT_COLUMNS[name], answer.rows, answer.totals);
 }

@@ -4,7 +4,7 @@ import type { Response } from 'express';
 import { Roles } from '../auth/decorators/roles.decorator';
 import { notFound } from '../common/errors/domain-error';
 import { AnyReportQueryDto, MonthsQueryDto, ReceivablesQueryDto, ReportQueryDto } from './dto/report-query.dto';
-import { reportCsv } from './report-csv';
+import { csvGroup, reportCsv } from './report-csv';
 import { REPORT_NAMES, type ReportName } from './report-queries';
 import { ReportsService } from './reports.service';
 
@@ -67,7 +67,7 @@ export class ReportsController {
     return this.reports.driveCost(query);
   }
 
-  /** Any report as a spreadsheet, with the same filters as its page. */
+  /** Any report as a spreadsheet, with the same filters as its page; groupBy picks the table where a page has two. */
   @Get(':name/csv')
   @ApiProduces('text/csv')
   @ApiParam({ name: 'name', enum: REPORT_NAMES })
@@ -77,13 +77,14 @@ export class ReportsController {
     @Query() query: AnyReportQueryDto,
     @Res({ passthrough: true }) response: Response,
   ): Promise<string> {
+    const groupBy = csvGroup(name, query.groupBy);
     const answer = await this.reports.byName(name, query);
     // Headers only once the report is made: a refused range still answers as JSON.
     response.setHeader('Content-Type', 'text/csv; charset=utf-8');
     response.setHeader(
       'Content-Disposition',
-      `attachment; filename="keenroute-${name}-${answer.from}-${answer.to}.csv"`,
+      `attachment; filename="keenroute-${name}${groupBy ? `-by-${groupBy}` : ''}-${answer.from}-${answer.to}.csv"`,
     );
-    return reportCsv(name, answer);
+    return reportCsv(name, answer, groupBy);
   }
 }

@@ -125,6 +125,9 @@ export type ToolKindsReport = ReportAnswer<ToolKindRow, LineShare>;
 export const RECEIVABLES_GROUPS = ['customer', 'stop'] as const;
 export type ReceivablesGroup = (typeof RECEIVABLES_GROUPS)[number];
 
+/** The cadence page's two tables; the CSV route takes `groupBy=sharpener` for the second. */
+export type CadenceGroup = 'stop' | 'sharpener';
+
 /** What is owed, by how long past due, for one bill-to party or one stop. */
 export interface AgeingFigures {
   invoices: number;

@@ -37,10 +37,20 @@ export class ReceivablesQueryDto extends ReportQueryDto {
   groupBy?: ReceivablesGroup;
 }
 
+export const CADENCE_GROUPS = ['stop', 'sharpener'] as const;
+export type CadenceGroup = (typeof CADENCE_GROUPS)[number];
+
+/** Which of a report's tables: receivables per customer or per stop; cadence per stop or per sharpener. */
+export const REPORT_GROUPS = ['customer', 'stop', 'sharpener'] as const;
+export type ReportGroup = (typeof REPORT_GROUPS)[number];
+
 /** The routes' query for any report, for the CSV route that serves them all. */
-export class AnyReportQueryDto extends ReceivablesQueryDto {
-  @ApiPropertyOptional({ description: "One stop's trend (months only)" })
+export class AnyReportQueryDto extends MonthsQueryDto {
+  @ApiPropertyOptional({
+    enum: REPORT_GROUPS,
+    description: 'Receivables: customer (default) or stop. Cadence: stop (default) or sharpener.',
+  })
   @IsOptional()
-  @IsUUID('all', { message: 'stopId must be a stop id.' })
-  stopId?: string;
+  @IsIn(REPORT_GROUPS, { message: 'groupBy is customer, stop or sharpener.' })
+  groupBy?: ReportGroup;
 }

@@ -14,9 +14,13 @@ export function getReportCsv({ name, params, extra }: ReportCsvRequest): Promise
   return api.blob(reportCsvPath(name), { query: reportQuery(params, extra) });
 }
 
-/** The name the server gives the file (keenroute-stops-2025-01-01-2025-12-31.csv), for when it lands in Downloads. */
-export function reportCsvFileName({ name, params }: ReportCsvRequest): string {
-  return `keenroute-${name}-${params.from}-${params.to}.csv`;
+/**
+ * The name the server gives the file, for when it lands in Downloads: keenroute-stops-2025-01-01-2025-12-31.csv, or
+ * keenroute-cadence-by-sharpener-… where the page has two tables.
+ */
+export function reportCsvFileName({ name, params, extra }: ReportCsvRequest): string {
+  const table = extra?.groupBy ? `-by-${extra.groupBy}` : '';
+  return `keenroute-${name}${table}-${params.from}-${params.to}.csv`;
 }
 
 /** The CSV needs the auth header, so it is fetched as a blob and handed to the browser to save. */

@@ -1,7 +1,7 @@
-import type { ReceivablesGroup, ReportName, ReportParams } from '../types';
+import type { CadenceGroup, ReceivablesGroup, ReportName, ReportParams } from '../types';
 
-/** Query string values beyond the common filters: a stop's trend, the receivables grouping. */
-export type ReportExtra = { stopId?: string; groupBy?: ReceivablesGroup };
+/** Query string values beyond the common filters: a stop's trend, which table of receivables or cadence. */
+export type ReportExtra = { stopId?: string; groupBy?: ReceivablesGroup | CadenceGroup };
 
 export const reportKeys = {
   all: ['reports'] as const,

@@ -122,7 +122,17 @@ export function CadenceReportRoute() {
               since the visit before. A stop&apos;s first visit ever is neither on time nor late; it counts in visits
               only.
             </Text>
-            <ReportSection title="Per sharpener">
+            <ReportSection
+              title="Per sharpener"
+              actions={
+                <CsvButton
+                  name="cadence"
+                  params={filters.params}
+                  extra={{ groupBy: 'sharpener' }}
+                  label="On time per sharpener"
+                />
+              }
+            >
               <ReportTable
                 label="On time per sharpener"
                 columns={onTimeColumns}
@@ -134,7 +144,7 @@ export function CadenceReportRoute() {
             <ReportSection
               title="Per stop"
               description="Average gap is the days between visits; latest by is the most days a visit came after it was due."
-              actions={<CsvButton name="cadence" params={filters.params} label="Cadence kept" />}
+              actions={<CsvButton name="cadence" params={filters.params} label="On time per stop" />}
             >
               <ReportTable
                 label="On time per stop"

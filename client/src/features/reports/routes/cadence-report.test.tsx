@@ -1,0 +1,79 @@
+import { screen, waitFor, within } from '@testing-library/react';
+import { Route, Routes } from 'react-router-dom';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { mockApi } from '@/testing/mock-api';
+import { renderWithProviders } from '@/testing/render';
+import { signInAs } from '@/testing/session';
+import { RANGE, cadenceReport, staffPage } from '../testing/fixtures';
+import { CadenceReportRoute } from './cadence-report';
+
+function renderCadence() {
+  return renderWithProviders(
+    <Routes>
+      <Route path="/reports/cadence" element={<CadenceReportRoute />} />
+    </Routes>,
+    { route: `/reports/cadence?from=${RANGE.from}&to=${RANGE.to}` },
+  );
+}
+
+const cells = (row: HTMLElement) =>
+  within(row)
+    .getAllByRole('cell')
+    .map((cell) => cell.textContent);
+
+/** Catches what the page hands the browser to save, by file name. */
+function catchDownloads(): string[] {
+  Object.defineProperty(URL, 'createObjectURL', { configurable: true, value: vi.fn(() => 'blob:report-csv') });
+  Object.defineProperty(URL, 'revokeObjectURL', { configurable: true, value: vi.fn() });
+  const saved: string[] = [];
+  vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (this: HTMLAnchorElement) {
+    saved.push(this.download);
+  });
+  return saved;
+}
+
+describe('cadence kept', { timeout: 30_000 }, () => {
+  beforeEach(() => {
+    signInAs('owner');
+  });
+  afterEach(() => {
+    vi.restoreAllMocks();
+  });
+
+  it('shows on time and late per sharpener and per stop, and each table downloads as its own CSV', async () => {
+    const saved = catchDownloads();
+    const server = mockApi({
+      'GET /api/reports/cadence': { status: 200, body: cadenceReport() },
+      'GET /api/reports/cadence/csv': { status: 200, body: 'Sharpener,Visits,On time,Late' },
+      'GET /api/users': { status: 200, body: staffPage() },
+    });
+    const { user } = renderCadence();
+
+    const perSharpener = await screen.findByRole('table', { name: 'On time per sharpener' });
+    // 9 on time of the 11 visits that had a visit before them: 82 %.
+    const sasha = within(perSharpener).getByText('Sasha Hone').closest('tr')!;
+    expect(cells(sasha).slice(1, 4)).toEqual(['12', '9', '2']);
+    expect(cells(sasha)[4]).toBe('82%');
+    const perStop = screen.getByRole('table', { name: 'On time per stop' });
+    const harbour = within(perStop).getByText('Harbour Groom Co. (demo)').closest('tr')!;
+    expect(cells(harbour)).toEqual([
+      'Harbour Groom Co. (demo)',
+      'Sasha Hone',
+      '4 wk',
+      '12',
+      '9',
+      '2',
+      '30.4 d',
+      '12 days',
+    ]);
+
+    await user.click(screen.getByRole('button', { name: 'Download CSV: On time per sharpener' }));
+    await waitFor(() => expect(saved).toEqual([`keenroute-cadence-by-sharpener-${RANGE.from}-${RANGE.to}.csv`]));
+    expect(server.callsTo('GET', '/api/reports/cadence/csv')[0]?.search.get('groupBy')).toBe('sharpener');
+
+    await user.click(screen.getByRole('button', { name: 'Download CSV: On time per stop' }));
+    await waitFor(() => expect(saved).toHaveLength(2));
+    expect(saved[1]).toBe(`keenroute-cadence-${RANGE.from}-${RANGE.to}.csv`);
+    expect(server.callsTo('GET', '/api/reports/cadence/csv')[1]?.search.has('groupBy')).toBe(false);
+  });
+});
