@@ -1,6 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { Route, Routes } from 'react-router-dom';
 import { beforeEach, describe, expect, it, vi } from 'vitest';
+import { catchDownloads } from '@/testing/downloads';
 import { mockApi } from '@/testing/mock-api';
 import { LocationProbe, renderWithProviders } from '@/testing/render';
 import { signInAs } from '@/testing/session';
@@ -62,10 +63,7 @@ describe('the Import page', () => {
 
   it('explains each kind of file and downloads its template with the session token', async () => {
     const server = mockApi({ 'GET /api/imports/templates/customers': { status: 200, body: 'name,email\r\n' } });
-    const createObjectURL = vi.fn((_blob: Blob) => 'blob:template');
-    Object.defineProperty(URL, 'createObjectURL', { configurable: true, value: createObjectURL });
-    Object.defineProperty(URL, 'revokeObjectURL', { configurable: true, value: vi.fn() });
-    const click = vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(() => {});
+    const downloads = catchDownloads();
     const { chooseKind, user } = renderImports();
 
     expect(screen.getByRole('heading', { name: 'Stops file columns' })).toBeInTheDocument();
@@ -75,11 +73,11 @@ describe('the Import page', () => {
     expect(screen.getByText('visit_notice_consent')).toBeInTheDocument();
 
     await user.click(screen.getByRole('button', { name: 'Download the template' }));
-    await waitFor(() => expect(click).toHaveBeenCalledTimes(1));
+    await waitFor(() => expect(downloads.names).toHaveLength(1));
     const [call] = server.callsTo('GET', '/api/imports/templates/customers');
     expect(call?.headers.get('Authorization')).toBe('Bearer token-office');
-    expect(await createObjectURL.mock.calls[0]![0].text()).toContain('name,email');
-    expect((click.mock.contexts[0] as HTMLAnchorElement).download).toBe('keenroute-customers-template.csv');
+    expect(await downloads.blobs[0]!.text()).toContain('name,email');
+    expect(downloads.names).toEqual(['keenroute-customers-template.csv']);
   });
 
   it('uploads the file with its kind and shows the problems by line, with no import button', async () => {

@@ -1,6 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { Route, Routes } from 'react-router-dom';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { catchDownloads } from '@/testing/downloads';
 import { mockApi } from '@/testing/mock-api';
 import { LocationProbe, renderWithProviders } from '@/testing/render';
 import { signInAs } from '@/testing/session';
@@ -271,19 +272,14 @@ describe('an invoice', { timeout: 30_000 }, () => {
   });
 
   it('downloads the PDF with the sign-in token under the invoice number', async () => {
-    Object.defineProperty(URL, 'createObjectURL', { configurable: true, value: vi.fn(() => 'blob:invoice-pdf') });
-    Object.defineProperty(URL, 'revokeObjectURL', { configurable: true, value: vi.fn() });
-    const saved: string[] = [];
-    vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (this: HTMLAnchorElement) {
-      saved.push(this.download);
-    });
+    const downloads = catchDownloads();
     const server = mockApi({
       ...detailRoutes(invoice()),
       'GET /api/invoices/inv-1/pdf': { status: 200, body: '%PDF' },
     });
     const { user } = renderInvoice();
     await user.click(await screen.findByRole('button', { name: 'Download PDF' }));
-    await waitFor(() => expect(saved).toEqual(['KR-2026-0007.pdf']));
+    await waitFor(() => expect(downloads.names).toEqual(['KR-2026-0007.pdf']));
     expect(server.callsTo('GET', '/api/invoices/inv-1/pdf')[0]?.headers.get('Authorization')).toBe(
       'Bearer token-office',
     );

@@ -1,6 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { Route, Routes } from 'react-router-dom';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { catchDownloads } from '@/testing/downloads';
 import { mockApi } from '@/testing/mock-api';
 import { renderWithProviders } from '@/testing/render';
 import { signInAs } from '@/testing/session';
@@ -97,13 +98,7 @@ describe('the invoices list', { timeout: 30_000 }, () => {
   });
 
   it('downloads the invoices and payments CSV for a period with the sign-in token', async () => {
-    const createObjectURL = vi.fn((_blob: Blob) => 'blob:invoices-csv');
-    Object.defineProperty(URL, 'createObjectURL', { configurable: true, value: createObjectURL });
-    Object.defineProperty(URL, 'revokeObjectURL', { configurable: true, value: vi.fn() });
-    const saved: string[] = [];
-    vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (this: HTMLAnchorElement) {
-      saved.push(this.download);
-    });
+    const downloads = catchDownloads();
     const server = mockApi({
       'GET /api/invoices': { status: 200, body: { items: rows, total: 2, page: 1, pageSize: 25 } },
       'GET /api/invoices/export.csv': { status: 200, body: 'number,status' },
@@ -126,16 +121,16 @@ describe('the invoices list', { timeout: 30_000 }, () => {
     await user.clear(from);
     await user.type(from, '2026-01-01');
     await user.click(within(dialog).getByRole('button', { name: 'Invoices CSV' }));
-    await waitFor(() => expect(saved).toEqual(['keenroute-invoices-2026-01-01-to-2026-03-01.csv']));
+    await waitFor(() => expect(downloads.names).toEqual(['keenroute-invoices-2026-01-01-to-2026-03-01.csv']));
     const [call] = server.callsTo('GET', '/api/invoices/export.csv');
     expect(call?.headers.get('Authorization')).toBe('Bearer token-office');
     expect(call?.search.get('from')).toBe('2026-01-01');
     expect(call?.search.get('to')).toBe('2026-03-01');
-    expect(await createObjectURL.mock.calls[0]![0].text()).toContain('number,status');
+    expect(await downloads.blobs[0]!.text()).toContain('number,status');
 
     await user.click(within(dialog).getByRole('button', { name: 'Payments CSV' }));
-    await waitFor(() => expect(saved).toHaveLength(2));
-    expect(saved[1]).toBe('keenroute-payments-2026-01-01-to-2026-03-01.csv');
+    await waitFor(() => expect(downloads.names).toHaveLength(2));
+    expect(downloads.names[1]).toBe('keenroute-payments-2026-01-01-to-2026-03-01.csv');
     expect(server.callsTo('GET', '/api/payments/export.csv')[0]?.headers.get('Authorization')).toBe(
       'Bearer token-office',
     );

@@ -1,6 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { Route, Routes } from 'react-router-dom';
-import { beforeEach, describe, expect, it, vi } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
+import { catchDownloads } from '@/testing/downloads';
 import { mockApi } from '@/testing/mock-api';
 import { LocationProbe, renderWithProviders } from '@/testing/render';
 import { signInAs } from '@/testing/session';
@@ -89,13 +90,7 @@ describe('the reports filter bar', { timeout: 30_000 }, () => {
   });
 
   it('keeps the filters of a shared link, and the CSV asks for the same figures with the sign-in', async () => {
-    const createObjectURL = vi.fn((_blob: Blob) => 'blob:report-csv');
-    Object.defineProperty(URL, 'createObjectURL', { configurable: true, value: createObjectURL });
-    Object.defineProperty(URL, 'revokeObjectURL', { configurable: true, value: vi.fn() });
-    const saved: string[] = [];
-    vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (this: HTMLAnchorElement) {
-      saved.push(this.download);
-    });
+    const downloads = catchDownloads();
     const server = mockApi({
       'GET /api/reports/stops': { status: 200, body: stopsReport() },
       'GET /api/reports/stops/csv': { status: 200, body: 'stop,city,visits' },
@@ -112,12 +107,12 @@ describe('the reports filter bar', { timeout: 30_000 }, () => {
 
     const section = screen.getByRole('region', { name: 'Every stop' });
     await user.click(within(section).getByRole('button', { name: 'Download CSV: Revenue per stop' }));
-    await waitFor(() => expect(saved).toEqual(['keenroute-stops-2024-07-01-2025-06-30.csv']));
+    await waitFor(() => expect(downloads.names).toEqual(['keenroute-stops-2024-07-01-2025-06-30.csv']));
     const [csv] = server.callsTo('GET', '/api/reports/stops/csv');
     expect(csv?.headers.get('Authorization')).toBe('Bearer token-owner');
     expect(csv?.search.get('from')).toBe('2024-07-01');
     expect(csv?.search.get('to')).toBe('2025-06-30');
     expect(csv?.search.get('sharpenerId')).toBe('u-sharpener');
-    expect(await createObjectURL.mock.calls[0]![0].text()).toContain('stop,city,visits');
+    expect(await downloads.blobs[0]!.text()).toContain('stop,city,visits');
   });
 });

@@ -1,6 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { Route, Routes } from 'react-router-dom';
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { beforeEach, describe, expect, it } from 'vitest';
+import { catchDownloads } from '@/testing/downloads';
 import { mockApi } from '@/testing/mock-api';
 import { renderWithProviders } from '@/testing/render';
 import { signInAs } from '@/testing/session';
@@ -21,27 +22,13 @@ const cells = (row: HTMLElement) =>
     .getAllByRole('cell')
     .map((cell) => cell.textContent);
 
-/** Catches what the page hands the browser to save, by file name. */
-function catchDownloads(): string[] {
-  Object.defineProperty(URL, 'createObjectURL', { configurable: true, value: vi.fn(() => 'blob:report-csv') });
-  Object.defineProperty(URL, 'revokeObjectURL', { configurable: true, value: vi.fn() });
-  const saved: string[] = [];
-  vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (this: HTMLAnchorElement) {
-    saved.push(this.download);
-  });
-  return saved;
-}
-
 describe('cadence kept', { timeout: 30_000 }, () => {
   beforeEach(() => {
     signInAs('owner');
   });
-  afterEach(() => {
-    vi.restoreAllMocks();
-  });
 
   it('shows on time and late per sharpener and per stop, and each table downloads as its own CSV', async () => {
-    const saved = catchDownloads();
+    const downloads = catchDownloads();
     const server = mockApi({
       'GET /api/reports/cadence': { status: 200, body: cadenceReport() },
       'GET /api/reports/cadence/csv': { status: 200, body: 'Sharpener,Visits,On time,Late' },
@@ -68,12 +55,14 @@ describe('cadence kept', { timeout: 30_000 }, () => {
     ]);
 
     await user.click(screen.getByRole('button', { name: 'Download CSV: On time per sharpener' }));
-    await waitFor(() => expect(saved).toEqual([`keenroute-cadence-by-sharpener-${RANGE.from}-${RANGE.to}.csv`]));
+    await waitFor(() =>
+      expect(downloads.names).toEqual([`keenroute-cadence-by-sharpener-${RANGE.from}-${RANGE.to}.csv`]),
+    );
     expect(server.callsTo('GET', '/api/reports/cadence/csv')[0]?.search.get('groupBy')).toBe('sharpener');
 
     await user.click(screen.getByRole('button', { name: 'Download CSV: On time per stop' }));
-    await waitFor(() => expect(saved).toHaveLength(2));
-    expect(saved[1]).toBe(`keenroute-cadence-${RANGE.from}-${RANGE.to}.csv`);
+    await waitFor(() => expect(downloads.names).toHaveLength(2));
+    expect(downloads.names[1]).toBe(`keenroute-cadence-${RANGE.from}-${RANGE.to}.csv`);
     expect(server.callsTo('GET', '/api/reports/cadence/csv')[1]?.search.has('groupBy')).toBe(false);
   });
 });
