@@ -3,12 +3,12 @@
  * and short limits: these catch a broken solver, they do not measure it (docs/benchmarks.md does).
  */
 import { join } from 'node:path';
+import { referenceDir } from './reference-dir';
 import { checkSolution } from '../solver/check-solution';
 import { solveSolomon, solveTsplib } from './route-bench';
 import { isPermutation } from './tsplib';
 
-// shared/reference sits beside the project: server/src/route-days/bench -> /work/shared/reference.
-const REFERENCE = join(__dirname, '../../../../../shared/reference');
+const REFERENCE = referenceDir();
 
 // Proven optimal tour lengths: TSPLIB (G. Reinelt, ORSA Journal on Computing 3(4), 1991), as listed in
 // shared/reference/README.md.

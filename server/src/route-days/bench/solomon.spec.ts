@@ -1,11 +1,11 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
+import { referenceDir } from './reference-dir';
 import { checkSolomonRoutes, parseSolomon } from './solomon';
 import type { PlannedRoute } from '../solver/types';
 import { SOLOMON_FLEET, solomonResultFromSolution, solomonToSolverInput } from './to-solver-input';
 
-// shared/reference sits beside the project: server/src/route-days/bench -> /work/shared/reference.
-const REFERENCE = join(__dirname, '../../../../../shared/reference/solomon');
+const REFERENCE = referenceDir('solomon');
 const load = (name: string) => parseSolomon(readFileSync(join(REFERENCE, `${name}.txt`), 'utf8'), name);
 
 describe('parseSolomon', () => {

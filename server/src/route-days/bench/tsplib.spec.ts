@@ -1,11 +1,11 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
+import { referenceDir } from './reference-dir';
 import { solve } from '../solver/solve';
 import { tsplibToSolverInput, tsplibTourFromSolution, OPEN_END } from './to-solver-input';
 import { euc2d, isPermutation, nearestNeighbourTour, nint, parseTour, parseTsplib, tourLength } from './tsplib';
 
-// shared/reference sits beside the project: server/src/route-days/bench -> /work/shared/reference.
-const REFERENCE = join(__dirname, '../../../../../shared/reference/tsplib');
+const REFERENCE = referenceDir('tsplib');
 const read = (file: string): string => readFileSync(join(REFERENCE, file), 'utf8');
 
 // Published optima from shared/reference/README.md.
