@@ -6,6 +6,7 @@ import { mockApi } from '@/testing/mock-api';
 import { renderWithProviders } from '@/testing/render';
 import { signInAs } from '@/testing/session';
 import { RANGE, cadenceReport, staffPage } from '../testing/fixtures';
+import { rowCells } from '../testing/table';
 import { CadenceReportRoute } from './cadence-report';
 
 function renderCadence() {
@@ -16,11 +17,6 @@ function renderCadence() {
     { route: `/reports/cadence?from=${RANGE.from}&to=${RANGE.to}` },
   );
 }
-
-const cells = (row: HTMLElement) =>
-  within(row)
-    .getAllByRole('cell')
-    .map((cell) => cell.textContent);
 
 describe('cadence kept', { timeout: 30_000 }, () => {
   beforeEach(() => {
@@ -39,11 +35,11 @@ describe('cadence kept', { timeout: 30_000 }, () => {
     const perSharpener = await screen.findByRole('table', { name: 'On time per sharpener' });
     // 9 on time of the 11 visits that had a visit before them: 82 %.
     const sasha = within(perSharpener).getByText('Sasha Hone').closest('tr')!;
-    expect(cells(sasha).slice(1, 4)).toEqual(['12', '9', '2']);
-    expect(cells(sasha)[4]).toBe('82%');
+    expect(rowCells(sasha).slice(1, 4)).toEqual(['12', '9', '2']);
+    expect(rowCells(sasha)[4]).toBe('82%');
     const perStop = screen.getByRole('table', { name: 'On time per stop' });
     const harbour = within(perStop).getByText('Harbour Groom Co. (demo)').closest('tr')!;
-    expect(cells(harbour)).toEqual([
+    expect(rowCells(harbour)).toEqual([
       'Harbour Groom Co. (demo)',
       'Sasha Hone',
       '4 wk',

@@ -5,6 +5,7 @@ import { mockApi } from '@/testing/mock-api';
 import { LocationProbe, renderWithProviders } from '@/testing/render';
 import { signInAs } from '@/testing/session';
 import { RANGE, receivablesByCustomer, receivablesByStop } from '../testing/fixtures';
+import { rowCells } from '../testing/table';
 import { ReceivablesReportRoute } from './receivables-report';
 
 function renderReceivables(search = `from=${RANGE.from}&to=${RANGE.to}`) {
@@ -23,11 +24,6 @@ function renderReceivables(search = `from=${RANGE.from}&to=${RANGE.to}`) {
     { route: `/reports/receivables?${search}` },
   );
 }
-
-const cells = (row: HTMLElement) =>
-  within(row)
-    .getAllByRole('cell')
-    .map((cell) => cell.textContent);
 
 describe('what is owed', { timeout: 30_000 }, () => {
   beforeEach(() => {
@@ -50,7 +46,7 @@ describe('what is owed', { timeout: 30_000 }, () => {
     expect(within(table).getAllByRole('columnheader')[0]).toHaveTextContent('Who pays');
     // Pine pays as a whole: 97.42 + 120.00 + 45.00 = 262.42.
     const pine = within(table).getByText('Pine Street Salon (demo)').closest('tr')!;
-    expect(cells(pine)).toEqual([
+    expect(rowCells(pine)).toEqual([
       'Pine Street Salon (demo)',
       '$262.42',
       '3',
@@ -63,10 +59,10 @@ describe('what is owed', { timeout: 30_000 }, () => {
     // Mira is billed herself; the stop she works at is said under her name.
     const mira = within(table).getByText('Mira Stylist (demo)').closest('tr')!;
     expect(mira).toHaveTextContent('Birch Lane Barbers (demo)');
-    expect(cells(mira)[1]).toBe('$62.30');
+    expect(rowCells(mira)[1]).toBe('$62.30');
     const totals = within(within(table).getAllByRole('rowgroup')[2]!).getByRole('row');
     // 262.42 + 62.30 = 324.72.
-    expect(cells(totals)).toEqual(['Everyone', '$324.72', '4', '$97.42', '$120.00', '$0.00', '$45.00', '$62.30']);
+    expect(rowCells(totals)).toEqual(['Everyone', '$324.72', '4', '$97.42', '$120.00', '$0.00', '$45.00', '$62.30']);
     // What is owed is for the whole business: no sharpener to choose.
     expect(screen.queryByRole('combobox', { name: 'Sharpener' })).not.toBeInTheDocument();
 
@@ -75,7 +71,7 @@ describe('what is owed', { timeout: 30_000 }, () => {
     expect(screen.getByTestId('location')).toHaveTextContent('groupBy=stop');
     await waitFor(() => expect(within(table).getAllByRole('columnheader')[0]).toHaveTextContent('Stop'));
     const birch = within(table).getByText('Birch Lane Barbers (demo)').closest('tr')!;
-    expect(cells(birch)).toEqual([
+    expect(rowCells(birch)).toEqual([
       'Birch Lane Barbers (demo)',
       '$62.30',
       '1',

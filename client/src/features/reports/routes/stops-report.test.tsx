@@ -5,6 +5,7 @@ import { mockApi } from '@/testing/mock-api';
 import { LocationProbe, renderWithProviders } from '@/testing/render';
 import { signInAs } from '@/testing/session';
 import { RANGE, monthsReport, staffPage, stopsReport } from '../testing/fixtures';
+import { rowCells } from '../testing/table';
 import { StopsReportRoute } from './stops-report';
 
 const RANGE_SEARCH = `from=${RANGE.from}&to=${RANGE.to}`;
@@ -32,12 +33,6 @@ function stopOrder(table: HTMLElement): string[] {
   return within(body)
     .getAllByRole('row')
     .map((row) => within(row).getAllByRole('cell')[0]!.querySelector('button')!.textContent ?? '');
-}
-
-function cellsOf(row: HTMLElement): string[] {
-  return within(row)
-    .getAllByRole('cell')
-    .map((cell) => cell.textContent ?? '');
 }
 
 describe('revenue per stop', { timeout: 30_000 }, () => {
@@ -75,7 +70,7 @@ describe('revenue per stop', { timeout: 30_000 }, () => {
 
     const pine = within(table).getByRole('button', { name: 'Pine Street Salon (demo)' }).closest('tr')!;
     // 243000 cents; 720 bench minutes = 12:00; 180.5 drive → 181 min = 3:01; 900.5 route → 901 min = 15:01.
-    expect(cellsOf(pine)).toEqual([
+    expect(rowCells(pine)).toEqual([
       'Pine Street Salon (demo)Larkhaven',
       '8 wk',
       '6',
@@ -93,12 +88,12 @@ describe('revenue per stop', { timeout: 30_000 }, () => {
     ]);
 
     const quay = within(table).getByRole('button', { name: 'Quay Street Grooming School (demo)' }).closest('tr')!;
-    expect(cellsOf(quay).slice(9)).toEqual(['—', '—', '—', '—', '—']);
+    expect(rowCells(quay).slice(9)).toEqual(['—', '—', '—', '—', '—']);
 
     const footer = within(table).getAllByRole('rowgroup')[2]!;
     const totals = within(footer).getByRole('row');
     // 6+12+3 visits; 2430+1980+510 dollars; 1710 bench min = 28:30; 695.7 drive → 696 = 11:36; 2405.7 → 2406 = 40:06.
-    expect(cellsOf(totals)).toEqual([
+    expect(rowCells(totals)).toEqual([
       'All stops',
       '',
       '21',
@@ -179,7 +174,7 @@ describe('revenue per stop', { timeout: 30_000 }, () => {
     expect(call?.search.get('from')).toBe(RANGE.from);
     expect(call?.search.get('to')).toBe(RANGE.to);
     const november = within(months).getByText('Nov 2025').closest('tr')!;
-    expect(cellsOf(november)).toEqual(['Nov 2025', '2', '18', '$810.00', '$405.00']);
+    expect(rowCells(november)).toEqual(['Nov 2025', '2', '18', '$810.00', '$405.00']);
     expect(within(drawer).getByRole('link', { name: 'Open the stop' })).toHaveAttribute('href', '/stops/s-pine');
     expect(screen.getByTestId('location')).toHaveTextContent('stop=s-pine');
 
